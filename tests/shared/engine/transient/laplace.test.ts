@@ -12,7 +12,7 @@ describe('Stehfest inversion', () => {
   it('weights: Σ V_k = 0 and Σ V_k/k = 1 (inverting F = 1 and F = 1/s; from memory)', () => {
     const V = stehfestWeights(14);
     expectClose(V.reduce((a, b) => a + b, 0), 0, 0, 1e-6, 'sum of weights');
-    expectClose(V.reduce((a, b, k) => a + b / (k + 1), 0), 1, 1e-10, 0, 'sum of V_k/k');
+    expectClose(V.reduce((a, b, k) => a + b / (k + 1), 0), 1, 1e-8, 0, 'sum of V_k/k');
     expect(Math.max(...V.map(Math.abs))).toBeGreaterThan(1e6);
   });
   it('inverts 1/(s(s+a)) ↔ (1 − e^{−at})/a (standard transform table)', () => {
