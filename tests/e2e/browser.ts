@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
+import type { Role } from '@shared/schemas/roles';
 import { demoUsers } from '../../server/db/seeders/demoUsers';
 
 export const screenshotDir = 'tests/e2e/screenshots';
@@ -32,8 +33,9 @@ export async function openBrowser(): Promise<{ context: BrowserContext; page: Pa
 export const baseUrl = () => inject('baseUrl');
 
 /** Sign in through the form as one of the demo users. */
-export async function signIn(page: Page, who: keyof typeof demoUsers): Promise<void> {
-  const user = demoUsers[who];
+export async function signIn(page: Page, who: Role): Promise<void> {
+  const user = demoUsers.find((u) => u.role === who);
+  if (!user) throw new Error(`no demo ${who}`);
   await page.goto(`${baseUrl()}/signin`);
   await page.locator('input[name="email"]').fill(user.email);
   await page.locator('input[name="password"]').fill(user.password);
