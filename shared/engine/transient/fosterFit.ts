@@ -1,0 +1,84 @@
+/**
+ * Foster fit of one step response (physics.md §3): Z(t) ≈ Σ_k R_k (1 − e^{−t/τ_k}) on a
+ * given log-spaced τ grid. Self-impedances: R_k ≥ 0 by NNLS (Lawson & Hanson 1974); transfer
+ * impedances: signed, lightly Tikhonov-regularised least squares. Σ R_k = steady R is imposed
+ * by a weighted extra row (the weighting method, Lawson & Hanson 1974, ch. 22), then made
+ * exact: non-negative terms are rescaled, signed ones absorb the rest in the slowest term.
+ */
+import { leastSquares } from './leastSquares';
+import { nnls } from './nnls';
+
+/** Fit settings (defaults in FOSTER_FIT_DEFAULTS). */
+export interface FosterFitSettings {
+  /** Non-negative terms (self-impedance) or signed terms (transfer impedance). */
+  sign: 'nonnegative' | 'signed';
+  /** Rows are weighted by 1/max(|Z(t)|, floor·|R_steady|): a relative fit with an absolute floor. */
+  floor: number;
+  /** Weight of the Σ R_k = R_steady row relative to a data row. */
+  steadyWeight: number;
+  /** Tikhonov parameter of signed fits, relative to the largest row weight. */
+  regularisation: number;
+}
+
+/** Default Foster fit settings. */
+export const FOSTER_FIT_DEFAULTS: FosterFitSettings = { sign: 'nonnegative', floor: 1e-3, steadyWeight: 1e3, regularisation: 1e-6 };
+
+/** One fitted response: term resistances (K/W) on the shared τ grid and the fit error. */
+export interface FosterFit {
+  R: number[];
+  /** Largest |fit − data| over the samples, K/W. */
+  maxAbsError: number;
+  /** maxAbsError / |R_steady| (or / max |Z| when R_steady = 0). */
+  relError: number;
+  /** False when the NNLS iteration bound was hit. */
+  converged: boolean;
+}
+
+/** Log-spaced time constants from tMin to tMax (s), `perDecade` per decade, both ends included. */
+export function logSpacedTaus(tMin: number, tMax: number, perDecade = 4): number[] {
+  const decades = Math.log10(tMax / tMin);
+  const count = Math.max(2, Math.ceil(decades * perDecade) + 1);
+  return Array.from({ length: count }, (_, k) => tMin * 10 ** ((decades * k) / (count - 1)));
+}
+
+/** Step response of Foster terms at time t. */
+export function fosterStep(R: readonly number[], tau: readonly number[], t: number): number {
+  let z = 0;
+  for (let k = 0; k < R.length; k++) z += R[k] * -Math.expm1(-t / tau[k]);
+  return z;
+}
+
+/** Fit Σ R_k(1 − e^{−t/τ_k}) to samples Z(times) with Σ R_k = steady. */
+export function fitFoster(
+  times: readonly number[],
+  values: readonly number[],
+  tau: readonly number[],
+  steady: number,
+  settings: Partial<FosterFitSettings> = {},
+): FosterFit {
+  const o = { ...FOSTER_FIT_DEFAULTS, ...settings };
+  const scale = Math.abs(steady) > 0 ? Math.abs(steady) : Math.max(1e-300, ...values.map(Math.abs));
+  const A: number[][] = [];
+  const b: number[] = [];
+  times.forEach((t, i) => {
+    const w = 1 / Math.max(Math.abs(values[i]), o.floor * scale);
+    A.push(tau.map((tk) => -Math.expm1(-t / tk) * w));
+    b.push(values[i] * w);
+  });
+  const ws = o.steadyWeight / scale;
+  A.push(tau.map(() => ws));
+  b.push(steady * ws);
+  let R: number[];
+  let converged = true;
+  if (o.sign === 'nonnegative') {
+    const r = nnls(A, b);
+    R = r.x;
+    converged = r.converged;
+  } else R = leastSquares(A, b, o.regularisation / (o.floor * scale));
+  const sum = R.reduce((a, r) => a + r, 0);
+  if (o.sign === 'nonnegative' && sum > 0) R = R.map((r) => (r * steady) / sum);
+  else if (o.sign === 'signed') R[R.length - 1] += steady - sum;
+  let maxAbsError = 0;
+  times.forEach((t, i) => (maxAbsError = Math.max(maxAbsError, Math.abs(fosterStep(R, tau, t) - values[i]))));
+  return { R, maxAbsError, relError: maxAbsError / scale, converged };
+}

@@ -1,0 +1,90 @@
+/**
+ * Automatic choice of the modal truncation (physics.md §1): start near 20·L / (smallest source side)
+ * per axis and double until the self-resistances — the largest entries of the influence matrix —
+ * change by less than the tolerance relative to the largest. The error falls roughly as 1/M²; the
+ * values compared are the Richardson-finished sums of influence.ts (each level uses its half level).
+ */
+import { ImpedanceCache } from './cache';
+import { EngineInputError } from './errors';
+import { selfInfluenceFromSpectra, type ModalTable, type Spectra } from './influence';
+import { CHANNEL_DEFAULTS } from './options';
+import { axisSpectra } from './spectrum';
+import type { Channel, RectSource, Truncation } from './types';
+
+/** The truncation used, how it was chosen and whether the doubling converged. */
+export interface TruncationReport extends Truncation {
+  auto: boolean;
+  converged: boolean;
+  /** Relative change of the largest self-resistance at the last doubling (or the Richardson correction when the cap allowed one level); 0 when fixed. */
+  lastChange: number;
+}
+
+/** Settings of the truncation search. */
+export interface TruncationSettings {
+  tolerance: number;
+  maxModes: number;
+  s: number;
+}
+
+/** Spectra of all sources at a given truncation. */
+export function buildSpectra(channel: Channel, sources: readonly RectSource[], m: number, n: number): Spectra {
+  return { fx: axisSpectra(sources, channel.lx, m, 'x'), fy: axisSpectra(sources, channel.ly, n, 'y'), m, n, count: sources.length };
+}
+
+/** Refuse an explicit truncation outside [1, cap]. */
+export function checkTruncation(t: Truncation, maxModes: number): void {
+  if (!(Number.isInteger(t.m) && Number.isInteger(t.n) && t.m >= 1 && t.n >= 1)) {
+    throw new EngineInputError('truncation', 'The truncation must be whole numbers of modes m ≥ 1 and n ≥ 1.');
+  }
+  if (t.m * t.n > maxModes) {
+    throw new EngineInputError('truncation', `The truncation ${t.m} × ${t.n} = ${t.m * t.n} modes is above the cap of ${maxModes} (M·N); use fewer modes.`);
+  }
+}
+
+function startCount(length: number, smallest: number): number {
+  return Math.max(Math.ceil((CHANNEL_DEFAULTS.startFactor * length) / smallest), CHANNEL_DEFAULTS.minModes);
+}
+
+function largestChange(next: Float64Array, prev: Float64Array): number {
+  let largest = 0;
+  let change = 0;
+  for (let i = 0; i < next.length; i++) {
+    largest = Math.max(largest, Math.abs(next[i]));
+    change = Math.max(change, Math.abs(next[i] - prev[i]));
+  }
+  return largest > 0 ? change / largest : 0;
+}
+
+/** Double the truncation until the self-resistances settle; returns the table of the final level. */
+export function autoTruncation(
+  channel: Channel,
+  sources: readonly RectSource[],
+  cache: ImpedanceCache,
+  settings: TruncationSettings,
+): { report: TruncationReport; table: ModalTable } {
+  let m = startCount(channel.lx, Math.min(...sources.map((q) => q.width)));
+  let n = startCount(channel.ly, Math.min(...sources.map((q) => q.height)));
+  if (m * n > settings.maxModes) {
+    const shrink = Math.sqrt(settings.maxModes / (m * n));
+    m = Math.max(1, Math.floor(m * shrink));
+    n = Math.max(1, Math.floor(n * shrink));
+  }
+  let table = cache.table(channel, m, n, settings.s);
+  let prev = selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n));
+  let lastChange = Infinity;
+  for (let k = 0; k < CHANNEL_DEFAULTS.maxDoublings && 4 * m * n <= settings.maxModes; k++) {
+    m *= 2;
+    n *= 2;
+    table = cache.table(channel, m, n, settings.s);
+    const next = selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n));
+    lastChange = largestChange(next, prev);
+    prev = next;
+    if (lastChange < settings.tolerance) break;
+  }
+  if (lastChange === Infinity) {
+    // The cap allowed one level only: the size of its Richardson correction bounds its error.
+    lastChange = largestChange(prev, selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n), 'raw'));
+  }
+  const converged = lastChange < settings.tolerance;
+  return { report: { m, n, auto: true, converged, lastChange }, table };
+}
