@@ -1,0 +1,21 @@
+/** Workspaces and their members. */
+import { z } from 'zod';
+import { roleSchema } from './roles';
+
+/** A workspace with the caller's role in it. */
+export const workspaceSchema = z.object({ id: z.number().int(), name: z.string(), role: roleSchema, createdAt: z.string() });
+export type Workspace = z.infer<typeof workspaceSchema>;
+
+/** One member of a workspace. */
+export const memberSchema = z.object({
+  userId: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  joinedAt: z.string(),
+});
+export type Member = z.infer<typeof memberSchema>;
+
+/** PATCH /api/workspaces/:wid/members/:uid body. */
+export const memberRoleSchema = z.object({ role: roleSchema });
+export type MemberRoleInput = z.infer<typeof memberRoleSchema>;
