@@ -1,13 +1,14 @@
 /** Footprint geometry of placed parts (model units: m; the screen shows mm). */
 import type { Part } from '@shared/schemas/model';
+import { partRect } from '@shared/layout/rules';
 
 /** Axis-aligned footprint of a part after rotation: centre and size, m. */
 export interface Rect { x: number; y: number; w: number; h: number }
 
 /** The part's footprint with 90°/270° rotation swapping width and height. */
 export function footprint(p: Pick<Part, 'x' | 'y' | 'width' | 'height' | 'rotation'>): Rect {
-  const swap = p.rotation === 90 || p.rotation === 270;
-  return { x: p.x, y: p.y, w: swap ? p.height : p.width, h: swap ? p.width : p.height };
+  const r = partRect(p);
+  return { x: p.x, y: p.y, w: r.w, h: r.h };
 }
 
 /** Metres to millimetres for display. */
