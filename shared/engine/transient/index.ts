@@ -13,3 +13,11 @@ export {
   type FosterNetworkSettings,
   type ImpedanceSeries,
 } from './fosterNetwork';
+export { MAX_PROFILE_STEPS, scheduleFromSegments, scheduleFromTable, type PowerSchedule, type PowerTable } from './schedule';
+export { simulateProfile, type SimulationOptions, type SimulationResult, type SimulationStart } from './simulateProfile';
+export { packNetwork, steadyState, stateTemperatures, temperatureAfter, type PackedNetwork } from './fosterState';
+export { firstCrossing, stateAfter, type Crossing } from './crossing';
+export { cycleMaxima, largestOnTime, periodicStartState } from './periodic';
+export { timingAnswers, type TimingAnswers, type TimingRequest } from './timingAnswers';
+export { formatCelsius, formatDuration, formatPercent, formatWatts } from './sentences';
+export { checkCancelled, TransientCancelledError, type LongRunHooks } from './progress';
