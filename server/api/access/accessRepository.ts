@@ -9,6 +9,8 @@ export interface Location {
   workspaceId: number;
   projectId?: number;
   assemblyId?: number;
+  variantId?: number;
+  recordId?: number;
 }
 
 /** The user's role in the workspace, or null when not a member. */
@@ -41,7 +43,7 @@ export function locateAssembly(assemblyId: number): Promise<Location | null> {
 /** Locate a variant. */
 export function locateVariant(variantId: number): Promise<Location | null> {
   return one(
-    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId
+    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId
      FROM variants v JOIN assemblies a ON a.id = v.assembly_id JOIN projects p ON p.id = a.project_id WHERE v.id = ?`,
     variantId,
   );
@@ -49,12 +51,12 @@ export function locateVariant(variantId: number): Promise<Location | null> {
 
 /** Locate a library material. */
 export function locateMaterial(materialId: number): Promise<Location | null> {
-  return one('SELECT workspace_id AS workspaceId FROM materials WHERE id = ?', materialId);
+  return one('SELECT workspace_id AS workspaceId, id AS recordId FROM materials WHERE id = ?', materialId);
 }
 
 /** Locate a part template. */
 export function locatePartTemplate(templateId: number): Promise<Location | null> {
-  return one('SELECT workspace_id AS workspaceId FROM part_templates WHERE id = ?', templateId);
+  return one('SELECT workspace_id AS workspaceId, id AS recordId FROM part_templates WHERE id = ?', templateId);
 }
 
 /** Locate a workspace (itself). */
