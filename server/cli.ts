@@ -7,7 +7,8 @@
 import { readFileSync } from 'node:fs';
 import { EngineInputError } from '../shared/engine/errors';
 import { solveChannelRequest } from '../shared/engine/channelRequest';
-import { solveModelFile } from './cliSolve';
+import { assemblyCsv } from '../shared/engine/assembly/csv';
+import { solveModelDocument } from '../shared/engine/assembly/modelFile';
 
 const USAGE = `usage:
   heatloom channel <request.json>
@@ -43,7 +44,8 @@ function run(argv: string[]): string {
       else if (rest[i] === '--scenario' && rest[i + 1]) scenario = rest[++i];
       else throw new CliError(`unknown option ${rest[i]}\n${USAGE}`);
     }
-    return solveModelFile(readJson(file), { scenario, csv });
+    const result = solveModelDocument(readJson(file), scenario);
+    return csv ? assemblyCsv(result) : JSON.stringify(result);
   }
   throw new CliError(`unknown command ${command}\n${USAGE}`);
 }

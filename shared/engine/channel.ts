@@ -22,6 +22,11 @@ export interface ChannelOptions {
   maxModes?: number;
   /** Memo of modal tables; null bypasses memoisation. */
   cache?: ImpedanceCache | null;
+  /**
+   * Allow both faces adiabatic: the (0,0) mode is dropped, so rises are relative to the plane's unknown
+   * mean level and the caller must add a zero-net-heat condition (the assembly does).
+   */
+  floating?: boolean;
 }
 
 /** Everything a field evaluation needs: the channel, its modal table, the sources' spectra. */
@@ -45,7 +50,7 @@ export interface ChannelInfluence {
 
 /** Validate, pick the truncation and build the modal table and spectra. */
 export function channelModes(channel: Channel, sources: readonly RectSource[], options: ChannelOptions = {}): ChannelModes {
-  checkChannel(channel, sources);
+  checkChannel(channel, sources, 'sources', options.floating ?? false);
   const s = options.s ?? CHANNEL_DEFAULTS.s;
   if (!(Number.isFinite(s) && s >= 0)) throw new EngineInputError('s', 'The Laplace variable s must be a finite number ≥ 0.');
   const maxModes = options.maxModes ?? CHANNEL_DEFAULTS.maxModes;

@@ -18,13 +18,13 @@ function checkStack(stack: ChannelStack, path: string): void {
   });
 }
 
-/** Throw EngineInputError unless the channel is physical and every source lies inside its footprint. */
-export function checkChannel(channel: Channel, sources: readonly RectSource[], sourcePath = 'sources'): void {
+/** Throw EngineInputError unless the channel is physical and every source lies inside its footprint (floating: both faces may be adiabatic). */
+export function checkChannel(channel: Channel, sources: readonly RectSource[], sourcePath = 'sources', floating = false): void {
   if (!positiveFinite(channel.lx)) throw new EngineInputError('footprint.x', 'The footprint length along x must be greater than 0 m.');
   if (!positiveFinite(channel.ly)) throw new EngineInputError('footprint.y', 'The footprint length along y must be greater than 0 m.');
   checkStack(channel.above, 'above');
   checkStack(channel.below, 'below');
-  if (channel.above.h === 0 && channel.below.h === 0) {
+  if (!floating && channel.above.h === 0 && channel.below.h === 0) {
     throw new EngineInputError('above.h', 'Both faces are adiabatic (h = 0): the heat has nowhere to go and no steady state exists. Give the top or bottom face a conductance h > 0.');
   }
   if (sources.length === 0) throw new EngineInputError(sourcePath, 'At least one source rectangle is needed.');

@@ -81,7 +81,7 @@ export function eigenvalues(length: number, count: number): Float64Array {
 
 /**
  * Weighted modal table W[m·N + n] = ε_m ε_n Z_mn / (Lx Ly) with ε_0 = 1, ε_k = 2 — the kernel of
- * every influence sum (physics.md §1).
+ * every influence sum (physics.md §1). A floating plane (both faces adiabatic, s = 0) gets W_00 = 0.
  */
 export function weightedImpedanceTable(channel: Channel, m: number, n: number, s = 0): Float64Array {
   const up = compileStack(channel.above, 'above', s);
@@ -99,7 +99,8 @@ export function weightedImpedanceTable(channel: Channel, m: number, n: number, s
     for (let j = 0; j < n; j++) {
       const b2 = l2 + del2[j];
       const z = parallelImpedance(stackImpedance(up, b2), stackImpedance(down, b2));
-      table[row + j] = (ei * (j === 0 ? 1 : 2) * z) / area;
+      // z = ∞ only for the (0,0) mode of a floating plane (both faces adiabatic, s = 0): dropped.
+      table[row + j] = z === Infinity ? 0 : (ei * (j === 0 ? 1 : 2) * z) / area;
     }
   }
   return table;

@@ -34,53 +34,70 @@ export function richardson(m: number, n: number): { hm: number; hn: number; fact
   return { hm, hn, factor: r > 1 ? 1 / (r - 1) : 0 };
 }
 
-function pairSum(table: ModalTable, sp: Spectra, i: number, j: number, yprod: Float64Array, mode: SumMode): number {
+/**
+ * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]). Rows of W are the outer loop so each
+ * row stays in cache while every pair uses it; the half level (Richardson) is summed in the same pass.
+ */
+function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMode): Float64Array {
   const { fx, fy, m: mm, n: nn } = sp;
   const { hm, hn, factor } = richardson(mm, nn);
+  const count = pairs.length / 2;
   const w = table.w;
   const stride = table.n;
-  const yi = i * nn;
-  const yj = j * nn;
-  for (let q = 0; q < nn; q++) yprod[q] = fy[yi + q] * fy[yj + q];
-  const xi = i * mm;
-  const xj = j * mm;
-  let full = 0;
-  let half = 0;
-  for (let p = 0; p < mm; p++) {
-    const xp = fx[xi + p] * fx[xj + p];
-    if (xp === 0) continue;
-    const row = p * stride;
-    let inner = 0;
-    let q = 0;
-    if (p < hm) {
-      for (; q < hn; q++) inner += w[row + q] * yprod[q];
-      half += xp * inner;
-    }
-    for (; q < nn; q++) inner += w[row + q] * yprod[q];
-    full += xp * inner;
+  const yprod = new Float64Array(count * nn);
+  for (let k = 0; k < count; k++) {
+    const yi = pairs[2 * k] * nn;
+    const yj = pairs[2 * k + 1] * nn;
+    for (let q = 0; q < nn; q++) yprod[k * nn + q] = fy[yi + q] * fy[yj + q];
   }
-  return mode === 'raw' ? full : full + (full - half) * factor;
+  const full = new Float64Array(count);
+  const half = new Float64Array(count);
+  for (let p = 0; p < mm; p++) {
+    const row = p * stride;
+    for (let k = 0; k < count; k++) {
+      const xp = fx[pairs[2 * k] * mm + p] * fx[pairs[2 * k + 1] * mm + p];
+      if (xp === 0) continue;
+      const yk = k * nn;
+      let inner = 0;
+      let q = 0;
+      if (p < hm) {
+        for (; q < hn; q++) inner += w[row + q] * yprod[yk + q];
+        half[k] += xp * inner;
+      }
+      for (; q < nn; q++) inner += w[row + q] * yprod[yk + q];
+      full[k] += xp * inner;
+    }
+  }
+  if (mode === 'raw') return full;
+  for (let k = 0; k < count; k++) full[k] += (full[k] - half[k]) * factor;
+  return full;
 }
 
 /** Full symmetric influence matrix (K/W), row-major count × count: [j·count + i] = rise of j per W in i. */
 export function influenceFromSpectra(table: ModalTable, sp: Spectra, mode: SumMode = 'extrapolated'): Float64Array {
   const count = sp.count;
-  const out = new Float64Array(count * count);
-  const yprod = new Float64Array(sp.n);
+  const pairs = new Int32Array(count * (count + 1));
+  let k = 0;
   for (let i = 0; i < count; i++) {
     for (let j = i; j < count; j++) {
-      const v = pairSum(table, sp, i, j, yprod, mode);
-      out[i * count + j] = v;
-      out[j * count + i] = v;
+      pairs[k++] = i;
+      pairs[k++] = j;
     }
+  }
+  const sums = pairSums(table, sp, pairs, mode);
+  const out = new Float64Array(count * count);
+  for (let p = 0; p < sums.length; p++) {
+    const i = pairs[2 * p];
+    const j = pairs[2 * p + 1];
+    out[i * count + j] = sums[p];
+    out[j * count + i] = sums[p];
   }
   return out;
 }
 
 /** Only the diagonal (self-resistances, K/W) — what the truncation check needs. */
 export function selfInfluenceFromSpectra(table: ModalTable, sp: Spectra, mode: SumMode = 'extrapolated'): Float64Array {
-  const out = new Float64Array(sp.count);
-  const yprod = new Float64Array(sp.n);
-  for (let i = 0; i < sp.count; i++) out[i] = pairSum(table, sp, i, i, yprod, mode);
-  return out;
+  const pairs = new Int32Array(2 * sp.count);
+  for (let i = 0; i < sp.count; i++) pairs[2 * i] = pairs[2 * i + 1] = i;
+  return pairSums(table, sp, pairs, mode);
 }

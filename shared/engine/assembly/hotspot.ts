@@ -1,0 +1,88 @@
+/**
+ * Junction hot spot of each part: mean junction temperature plus the largest local excess over the
+ * footprint, where the excess is the planes' variation under the part passed through the column as a
+ * 1-D divider (up path R_u, down path R_d: δT_j = (R_d·δT_lid + R_u·δT_interposer)/(R_u + R_d), no
+ * extra spreading in the die — conservative) plus the part's own power-map non-uniformity.
+ */
+import type { Scenario } from '../../schemas/model';
+import { nextPow2 } from '../field';
+import type { Channel } from '../types';
+import { plain } from './geometry';
+import { loadOf } from './loads';
+import type { AssemblyNetwork, NetworkState } from './network';
+import { sampleMap, type PlacedMap } from './planeMaps';
+import { powerMapField, rotateMap } from './powerMap';
+
+/** The hot spot of one part (°C) and where it is (interposer coordinates, m). */
+export interface HotSpot {
+  value: number;
+  x: number;
+  y: number;
+}
+
+function upResistance(net: AssemblyNetwork, p: number): number | null {
+  const col = net.columns[p];
+  if (col.rUp === null) return null;
+  return col.links.reduce((a, b) => a + b, 0) + col.rUp;
+}
+
+function localChannel(net: AssemblyNetwork, p: number, ru: number | null): Channel {
+  const g = net.geometry[p];
+  const part = g.part;
+  const dieR = part.die.thickness / part.die.kz;
+  const lidSelf = net.lid && ru !== null ? net.lid.flat[net.lid.parts.indexOf(p) * net.lid.parts.length + net.lid.parts.indexOf(p)] : 0;
+  const rest = ru === null ? Infinity : g.area * (ru + lidSelf) - dieR;
+  const ipIndex = net.interposer.parts.indexOf(p);
+  const ipSelf = net.interposer.flat[ipIndex * net.interposer.parts.length + ipIndex];
+  return {
+    lx: g.footprint.width,
+    ly: g.footprint.height,
+    above: { layers: [plain(part.die)], h: rest > 0 && Number.isFinite(rest) ? 1 / rest : 0 },
+    below: { layers: [plain(part.bumps)], h: 1 / (g.area * Math.max(ipSelf, 1e-12)) },
+  };
+}
+
+/** Hot spot of every part for a solved state and its plane maps. */
+export function hotSpots(net: AssemblyNetwork, state: NetworkState, scenario: Scenario, maps: { interposer: PlacedMap; lid: PlacedMap | null }): HotSpot[] {
+  return net.geometry.map((g, p) => {
+    const ru = upResistance(net, p);
+    const rd = net.columns[p].rDown;
+    const wLid = ru === null ? 0 : rd / (ru + rd);
+    const wIp = 1 - wLid;
+    const load = loadOf(scenario, g.part.id);
+    const rotated = load.map ? rotateMap(load.map, g.part.rotation) : null;
+    const gx = nextPow2(Math.max(32, 2 * (rotated?.nx ?? 0)));
+    const gy = nextPow2(Math.max(32, 2 * (rotated?.ny ?? 0)));
+    const own = rotated && load.power > 0 ? powerMapField(localChannel(net, p, ru), rotated, load.power, gx, gy) : null;
+    const fp = g.footprint;
+    const x0 = fp.x - fp.width / 2;
+    const y0 = fp.y - fp.height / 2;
+    const dx = fp.width / gx;
+    const dy = fp.height / gy;
+    const excess = new Float64Array(gx * gy);
+    let meanIp = 0;
+    let meanLid = 0;
+    for (let iy = 0; iy < gy; iy++) {
+      for (let ix = 0; ix < gx; ix++) {
+        const x = x0 + (ix + 0.5) * dx;
+        const y = y0 + (iy + 0.5) * dy;
+        const ti = sampleMap(maps.interposer, x, y);
+        const tl = maps.lid && wLid > 0 ? sampleMap(maps.lid, x, y) : 0;
+        meanIp += ti;
+        meanLid += tl;
+        excess[iy * gx + ix] = wIp * ti + wLid * tl + (own ? own.values[iy * gx + ix] : 0);
+      }
+    }
+    const base = (wIp * meanIp + wLid * meanLid) / (gx * gy);
+    let best = 0;
+    let at = (gy / 2) * gx + gx / 2;
+    for (let i = 0; i < excess.length; i++) {
+      if (excess[i] - base > best) {
+        best = excess[i] - base;
+        at = i;
+      }
+    }
+    const tj = state.T[net.junctionNode[p]];
+    return { value: tj + best, x: x0 + ((at % gx) + 0.5) * dx, y: y0 + (Math.floor(at / gx) + 0.5) * dy };
+  });
+}

@@ -1,0 +1,13 @@
+/** Heatloom's thermal engine: flux channel (physics.md §1), assembly (§2); pure TypeScript, SI units. */
+export { channelInfluence, channelModes, meanRises, toRows, type ChannelInfluence, type ChannelModes, type ChannelOptions } from './channel';
+export { solveChannelRequest, toChannel } from './channelRequest';
+export { EngineInputError, formatPath, type InputIssue } from './errors';
+export { ImpedanceCache, defaultImpedanceCache, channelKey } from './cache';
+export { CHANNEL_DEFAULTS } from './options';
+export { compileStack, stackImpedance, parallelImpedance, weightedImpedanceTable, uniformModeImpedances } from './impedance';
+export { influenceFromSpectra, selfInfluenceFromSpectra, richardson, type ModalTable, type Spectra } from './influence';
+export { modalTemperatures, fieldMap, pointValue, type FieldMap } from './field';
+export { peaksOverRects, type ModalField } from './peak';
+export type { TruncationReport } from './truncation';
+export type { Channel, ChannelLayer, ChannelStack, RectSource, Truncation } from './types';
+export * from './assembly';
