@@ -1,0 +1,88 @@
+/** Layout screen in the browser: drag a memory stack beside a compute chiplet, see an overlap flagged, reviewer cannot drag. */
+import { afterAll, beforeAll, expect, test } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { openBrowser, shot, signIn } from './browser';
+
+let page: Page;
+let close: () => Promise<void>;
+let variantUrl = '';
+
+beforeAll(async () => {
+  ({ page, close } = await openBrowser());
+});
+afterAll(async () => close?.());
+
+async function openFirstVariant(p: Page): Promise<void> {
+  await p.locator('[data-test="project-link"]').first().click();
+  await p.locator('[data-test="assembly-link"]').first().click();
+  await p.locator('[data-test="variant-link"]').first().click();
+  await p.locator('[data-test="layout-canvas"]').waitFor();
+}
+
+/** Centre of an element in page px. */
+async function centre(l: Locator): Promise<{ x: number; y: number; w: number; h: number }> {
+  const b = await l.boundingBox();
+  if (!b) throw new Error('element not visible');
+  return { x: b.x + b.width / 2, y: b.y + b.height / 2, w: b.width, h: b.height };
+}
+
+async function dragBy(p: Page, from: { x: number; y: number }, to: { x: number; y: number }): Promise<void> {
+  await p.mouse.move(from.x, from.y);
+  await p.mouse.down();
+  await p.mouse.move((from.x + to.x) / 2, (from.y + to.y) / 2, { steps: 5 });
+  await p.mouse.move(to.x, to.y, { steps: 5 });
+  await p.mouse.up();
+}
+
+const mmOf = async (l: Locator) => Number(await l.getAttribute('data-x-mm'));
+
+test('the engineer drags a memory stack next to a compute chiplet, then onto it (overlap flagged)', async () => {
+  await signIn(page, 'engineer');
+  await openFirstVariant(page);
+  variantUrl = page.url();
+  const compute = page.locator('[data-test^="part-cpu"]').first();
+  if ((await page.locator('[data-test^="part-mem"]').count()) === 0) await page.locator('[data-test="add-memory"]').click();
+  const memory = page.locator('[data-test^="part-mem"]').first();
+  await memory.waitFor();
+  await shot(page, 'layout-engineer-start');
+
+  const c = await centre(compute.locator('rect.body'));
+  const m = await centre(memory.locator('rect.body'));
+  const x0 = await mmOf(memory);
+  const target = { x: c.x + c.w / 2 + m.w / 2 + 12, y: c.y };
+  await dragBy(page, m, target);
+  const x1 = await mmOf(memory);
+  expect(Math.abs(x1 - x0), `memory x moved from ${x0} mm to ${x1} mm`).toBeGreaterThan(0.5);
+  await expect(page.locator('[data-test="rule-overlap"]').count()).resolves.toBe(0);
+  await shot(page, 'layout-engineer-beside');
+
+  await dragBy(page, await centre(memory.locator('rect.body')), { x: c.x + c.w / 4, y: c.y });
+  await page.locator('[data-test="rule-overlap"]').first().waitFor();
+  await expect(memory.getAttribute('data-rule')).resolves.toBe('error');
+  await expect(page.locator('[data-test="solve-state"]').textContent()).resolves.toContain('Not solved');
+  await shot(page, 'layout-engineer-overlap');
+
+  await page.keyboard.press('Control+z');
+  await expect(page.locator('[data-test="rule-overlap"]').count()).resolves.toBe(0);
+  await page.locator('[data-test="save"]').click();
+  await page.locator('[data-test="version"]').filter({ hasText: 'v2' }).waitFor();
+});
+
+test('the reviewer sees the layout but cannot drag a part', async () => {
+  const { page: rp, close: rclose } = await openBrowser();
+  try {
+    await signIn(rp, 'reviewer');
+    await rp.goto(variantUrl);
+    await rp.locator('[data-test="layout-canvas"]').waitFor();
+    const part = rp.locator('[data-test^="part-"]').first();
+    const x0 = await mmOf(part);
+    const at = await centre(part.locator('rect.body'));
+    await dragBy(rp, at, { x: at.x + 80, y: at.y + 40 });
+    await expect(mmOf(part)).resolves.toBe(x0);
+    await expect(rp.locator('[data-test="save"]').count()).resolves.toBe(0);
+    await expect(rp.locator('[data-test^="add-"]').count()).resolves.toBe(0);
+    await shot(rp, 'layout-reviewer');
+  } finally {
+    await rclose();
+  }
+});
