@@ -6,7 +6,7 @@
  */
 import type { PowerMap } from '../../schemas/model';
 import { weightedImpedanceTable } from '../impedance';
-import { fieldMap, type FieldMap } from '../field';
+import { fieldMap, sigmaFactors, type FieldMap } from '../field';
 import { sinc } from '../spectrum';
 import type { Channel } from '../types';
 
@@ -67,7 +67,9 @@ export function powerMapField(channel: Channel, grid: { nx: number; ny: number; 
       for (let b = 0; b < n; b++) theta[a * n + b] += c * u[ix * n + b];
     }
   }
-  for (let i = 0; i < theta.length; i++) theta[i] *= table[i];
+  const sx = sigmaFactors(m);
+  const sy = sigmaFactors(n);
+  for (let a = 0; a < m; a++) for (let b = 0; b < n; b++) theta[a * n + b] *= table[a * n + b] * sx[a] * sy[b];
   theta[0] = 0;
   return fieldMap(theta, m, n, channel.lx, channel.ly, gx, gy);
 }
