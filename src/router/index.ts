@@ -12,6 +12,8 @@ const routes: RouteRecordRaw[] = [
   { path: '/w/:wid/outbox', name: 'outbox', component: () => import('@/pages/team/OutboxPage.vue') },
   { path: '/projects/:pid', name: 'project', component: () => import('@/pages/project/ProjectPage.vue') },
   { path: '/assemblies/:aid', name: 'assembly', component: () => import('@/pages/assembly/AssemblyPage.vue') },
+  { path: '/assemblies/:aid/compare', name: 'compare', component: () => import('@/pages/compare/ComparePage.vue') },
+  { path: '/w/:wid/library', name: 'library', component: () => import('@/pages/library/LibraryPage.vue') },
   { path: '/variants/:vid', name: 'variant', component: () => import('@/pages/variant/VariantPage.vue') },
   { path: '/:rest(.*)*', name: 'missing', component: () => import('@/pages/home/MissingPage.vue'), meta: { public: true } },
 ];
