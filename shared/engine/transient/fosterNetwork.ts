@@ -5,20 +5,30 @@
  */
 import { fitFoster, logSpacedTaus, type FosterFitSettings } from './fosterFit';
 
-/** Sampled step responses: Z[k][j][i] = rise of node j at times[k] per watt stepped on in node i (K/W). */
+/** Sampled step responses: Z[k][j][i] = rise of node j at times[k] per watt stepped on in source i (K/W). */
 export interface ImpedanceSeries {
   times: number[];
   Z: number[][][];
   /** Steady influence matrix R[j][i] (K/W) = Z(t → ∞). */
   steady: number[][];
+  /** Names of the rows (nodes). */
   labels?: string[];
+  /** Names of the columns (sources); default the row names. */
+  sourceLabels?: string[];
+  /** Row of each source's own node (its self-impedance); default i. */
+  sourceNodes?: number[];
 }
 
-/** Foster network of N nodes: R[j][i][k] (K/W) on time constants tau[k] (s). */
+/** Foster network: R[j][i][k] (K/W) from source i to node j on time constants tau[k] (s). */
 export interface FosterNetwork {
   tau: number[];
   R: number[][][];
+  /** Row (node) names. */
   labels: string[];
+  /** Column (source) names; default the row names. */
+  sourceLabels?: string[];
+  /** Row whose temperature each source's own power law reads; default i. */
+  sourceNodes?: number[];
 }
 
 /** Settings of fitFosterNetwork (defaults in FOSTER_NETWORK_DEFAULTS). */
@@ -45,32 +55,46 @@ export interface FosterNetworkFit {
   converged: boolean;
 }
 
-/** Fit every entry of an impedance matrix with Foster terms on one shared τ grid. */
+/**
+ * Fit every entry of an impedance matrix with Foster terms on one shared τ grid. A square matrix
+ * whose sources are its own nodes is symmetric (reciprocity): only j ≥ i is fitted and mirrored.
+ */
 export function fitFosterNetwork(series: ImpedanceSeries, settings: Partial<FosterNetworkSettings> = {}): FosterNetworkFit {
   const o = { ...FOSTER_NETWORK_DEFAULTS, ...settings };
   const { times, Z, steady } = series;
-  const n = steady.length;
+  const rows = steady.length;
+  const cols = rows > 0 ? steady[0].length : 0;
+  const own = (i: number) => series.sourceNodes?.[i] ?? i;
+  const symmetric = rows === cols && steady.every((_, i) => own(i) === i);
   const tau = logSpacedTaus(o.tauMin ?? times[0] / 2, o.tauMax ?? times[times.length - 1], o.perDecade);
-  const R = steady.map(() => steady.map(() => [] as number[]));
-  const maxAbsError = steady.map(() => new Array<number>(n).fill(0));
-  const relError = steady.map(() => new Array<number>(n).fill(0));
+  const R = steady.map(() => new Array<number[]>(cols));
+  const maxAbsError = steady.map(() => new Array<number>(cols).fill(0));
+  const relError = steady.map(() => new Array<number>(cols).fill(0));
   let worst = { node: 0, source: 0, relError: 0 };
   let converged = true;
-  for (let j = 0; j < n; j++) {
-    for (let i = 0; i <= j; i++) {
-      const values = times.map((_, k) => (j === i ? Z[k][j][i] : 0.5 * (Z[k][j][i] + Z[k][i][j])));
-      const sign = j === i ? 'nonnegative' : 'signed';
-      const f = fitFoster(times, values, tau, 0.5 * (steady[j][i] + steady[i][j]), { ...o.fit, sign });
+  for (let j = 0; j < rows; j++) {
+    for (let i = 0; i < (symmetric ? j + 1 : cols); i++) {
+      const mirror = symmetric && i !== j;
+      const values = times.map((_, k) => (mirror ? 0.5 * (Z[k][j][i] + Z[k][i][j]) : Z[k][j][i]));
+      const sign = own(i) === j ? 'nonnegative' : 'signed';
+      const f = fitFoster(times, values, tau, mirror ? 0.5 * (steady[j][i] + steady[i][j]) : steady[j][i], { ...o.fit, sign });
       converged &&= f.converged;
       R[j][i] = f.R;
-      R[i][j] = f.R;
-      maxAbsError[j][i] = maxAbsError[i][j] = f.maxAbsError;
-      relError[j][i] = relError[i][j] = f.relError;
+      maxAbsError[j][i] = f.maxAbsError;
+      relError[j][i] = f.relError;
+      if (mirror) {
+        R[i][j] = f.R;
+        maxAbsError[i][j] = f.maxAbsError;
+        relError[i][j] = f.relError;
+      }
       if (f.relError > worst.relError) worst = { node: j, source: i, relError: f.relError };
     }
   }
   const labels = series.labels ?? steady.map((_, j) => `node-${j}`);
-  return { network: { tau, R, labels }, maxAbsError, relError, worst, converged };
+  const network: FosterNetwork = { tau, R, labels };
+  if (series.sourceLabels) network.sourceLabels = series.sourceLabels;
+  if (series.sourceNodes) network.sourceNodes = series.sourceNodes;
+  return { network, maxAbsError, relError, worst, converged };
 }
 
 /** Step response matrix of a network at time t: Z[j][i] (K/W). */

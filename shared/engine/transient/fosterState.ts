@@ -6,21 +6,26 @@
  */
 import type { FosterNetwork } from './fosterNetwork';
 
-/** Flat, fast form of a network: r[(j·n + i)·K + k], with n nodes and K time constants. */
+/** Flat, fast form of a network: r[(j·n + i)·K + k], with `rows` nodes, n sources and K time constants. */
 export interface PackedNetwork {
+  rows: number;
   n: number;
   K: number;
   tau: Float64Array;
   r: Float64Array;
+  /** Row each source's power law reads (feedback). */
+  sourceNodes: Int32Array;
 }
 
 /** Pack a network for the inner loops. */
 export function packNetwork(network: FosterNetwork): PackedNetwork {
-  const n = network.R.length;
+  const rows = network.R.length;
+  const n = rows > 0 ? network.R[0].length : 0;
   const K = network.tau.length;
-  const r = new Float64Array(n * n * K);
-  for (let j = 0; j < n; j++) for (let i = 0; i < n; i++) for (let k = 0; k < K; k++) r[(j * n + i) * K + k] = network.R[j][i][k];
-  return { n, K, tau: Float64Array.from(network.tau), r };
+  const r = new Float64Array(rows * n * K);
+  for (let j = 0; j < rows; j++) for (let i = 0; i < n; i++) for (let k = 0; k < K; k++) r[(j * n + i) * K + k] = network.R[j][i][k];
+  const sourceNodes = Int32Array.from({ length: n }, (_, i) => network.sourceNodes?.[i] ?? i);
+  return { rows, n, K, tau: Float64Array.from(network.tau), r, sourceNodes };
 }
 
 /** State with every source in steady state at `power` (W); zeros = ambient. */
@@ -47,10 +52,10 @@ export function decayFactors(net: PackedNetwork, dt: number, out = new Float64Ar
 }
 
 /** Node temperatures (°C) of a state into `out`. */
-export function stateTemperatures(net: PackedNetwork, x: Float64Array, base: readonly number[], out: Float64Array = new Float64Array(net.n)): Float64Array {
+export function stateTemperatures(net: PackedNetwork, x: Float64Array, base: readonly number[], out: Float64Array = new Float64Array(net.rows)): Float64Array {
   const { n, K, r } = net;
   const row = n * K;
-  for (let j = 0; j < n; j++) {
+  for (let j = 0; j < net.rows; j++) {
     let s = base[j];
     const off = j * row;
     for (let q = 0; q < row; q++) s += r[off + q] * x[q];

@@ -21,3 +21,5 @@ export { cycleMaxima, largestOnTime, periodicStartState } from './periodic';
 export { timingAnswers, type TimingAnswers, type TimingRequest } from './timingAnswers';
 export { formatCelsius, formatDuration, formatPercent, formatWatts } from './sentences';
 export { checkCancelled, TransientCancelledError, type LongRunHooks } from './progress';
+export { buildPlaneKernel, planeMatrixAt, KERNEL_POINTS_PER_DECADE, type PlaneKernel } from './planeKernel';
+export { assemblyResponseAt, prepareLaplaceAssembly, type LaplaceAssembly } from './laplaceAssembly';

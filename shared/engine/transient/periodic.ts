@@ -31,7 +31,7 @@ export function cycleMaxima(net: PackedNetwork, base: readonly number[], period:
     for (let q = 1; q <= S; q++) {
       const t = q <= S / 2 ? length * 10 ** (-4 * (1 - q / (S / 2))) * 0.5 : (length * q) / S;
       const T = stateTemperatures(net, stateAfter(net, x0, power, t), base);
-      for (let j = 0; j < net.n; j++) max[j] = Math.max(max[j], T[j]);
+      for (let j = 0; j < net.rows; j++) max[j] = Math.max(max[j], T[j]);
     }
   };
   if (onTime > 0) scan(xs, onPower, onTime);

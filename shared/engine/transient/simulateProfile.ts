@@ -31,7 +31,7 @@ export interface SimulationOptions extends LongRunHooks {
   temperatureCap?: number;
 }
 
-/** Result of simulateProfile: samples at `times` (s); temperatures[j][s] °C, power[i][s] W held from times[s]. */
+/** Result of simulateProfile: samples at `times` (s); temperatures[node][s] °C, power[source][s] W held from times[s]. */
 export interface SimulationResult {
   status: 'complete' | 'runaway';
   times: number[];
@@ -52,14 +52,15 @@ function sampleOffsets(length: number, count: number): number[] {
 /** Simulate a schedule on a Foster network; bounded by maxSteps, cancellable. */
 export function simulateProfile(network: FosterNetwork, schedule: PowerSchedule, options: SimulationOptions): SimulationResult {
   const net = packNetwork(network);
-  const { n } = net;
+  const { n, rows } = net;
   const perInterval = Math.max(1, Math.floor(options.samplesPerInterval ?? 1));
   const intervals = schedule.power.length;
   const maxSteps = options.maxSteps ?? MAX_PROFILE_STEPS;
   if (intervals * perInterval > maxSteps) {
     throw new EngineInputError('profile', `The simulation needs ${intervals * perInterval} steps, above the cap of ${maxSteps}.`);
   }
-  if (options.baseTemperatures.length !== n) throw new EngineInputError('baseTemperatures', `Expected ${n} base temperatures.`);
+  if (options.baseTemperatures.length !== rows) throw new EngineInputError('baseTemperatures', `Expected ${rows} base temperatures.`);
+  if (schedule.power.some((row) => row.length !== n)) throw new EngineInputError('profile', `Every step needs ${n} source powers.`);
   const start = options.start ?? 'ambient';
   const x = start === 'ambient' ? steadyState(net, []) : 'state' in start ? Float64Array.from(start.state) : steadyState(net, start.steadyPower);
   const laws = options.feedback;
@@ -80,7 +81,7 @@ export function simulateProfile(network: FosterNetwork, schedule: PowerSchedule,
     for (const off of sampleOffsets(schedule.bounds[q + 1] - t0, perInterval)) {
       for (let i = 0; i < n; i++) {
         const dyn = schedule.power[q][i];
-        p[i] = laws ? evaluatePower({ ...laws[i], dynamic: dyn }, T[i]).total : dyn;
+        p[i] = laws ? evaluatePower({ ...laws[i], dynamic: dyn }, T[net.sourceNodes[i]]).total : dyn;
         power[i].push(p[i]);
       }
       const dt = off - prev;
@@ -90,7 +91,7 @@ export function simulateProfile(network: FosterNetwork, schedule: PowerSchedule,
       stateTemperatures(net, x, options.baseTemperatures, T);
       prev = off;
       times.push(t0 + off);
-      for (let j = 0; j < n; j++) {
+      for (let j = 0; j < rows; j++) {
         temperatures[j].push(T[j]);
         if (T[j] > peaks[j].temperature) peaks[j] = { temperature: T[j], time: t0 + off };
       }

@@ -42,7 +42,7 @@ export interface TimingAnswers {
 export function timingAnswers(network: FosterNetwork, baseTemperatures: readonly number[], req: TimingRequest): TimingAnswers {
   const net = packNetwork(network);
   const n = net.n;
-  if (!(Number.isInteger(req.node) && req.node >= 0 && req.node < n)) throw new EngineInputError('node', `Choose a node from 0 to ${n - 1}.`);
+  if (!(Number.isInteger(req.node) && req.node >= 0 && req.node < net.rows)) throw new EngineInputError('node', `Choose a node from 0 to ${net.rows - 1}.`);
   for (const key of ['boostPower', 'restPower'] as const) {
     if (req[key].length !== n || !req[key].every((p) => Number.isFinite(p) && p >= 0)) throw new EngineInputError(key, `Give ${n} finite powers ≥ 0 W.`);
   }
@@ -51,8 +51,9 @@ export function timingAnswers(network: FosterNetwork, baseTemperatures: readonly
   const start = req.start ?? 'ambient';
   const x0 = start === 'ambient' ? steadyState(net, []) : 'state' in start ? start.state : steadyState(net, start.steadyPower);
   const from = req.startLabel ?? (start === 'ambient' ? 'from ambient' : 'from the given state');
-  const boostW = formatWatts(req.boostPower[req.node]);
-  const restW = formatWatts(req.restPower[req.node]);
+  const own = Array.from(net.sourceNodes).indexOf(req.node);
+  const boostW = formatWatts(own >= 0 ? req.boostPower[own] : req.boostPower.reduce((a, b) => a + b, 0));
+  const restW = formatWatts(own >= 0 ? req.restPower[own] : req.restPower.reduce((a, b) => a + b, 0));
   const lim = formatCelsius(req.limit);
   const up = firstCrossing(net, x0, req.boostPower, baseTemperatures, req.node, req.limit, 'up');
   const boostSentence =
