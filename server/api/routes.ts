@@ -11,6 +11,7 @@ import { variantsRouter } from './variants/variantsRouter';
 import { commentsRouter } from './comments/commentsRouter';
 import { activityRouter } from './activity/activityRouter';
 import { libraryRouter } from './library/libraryRouter';
+import { solveRouter } from './solve/solveRouter';
 
 /** All API routes (mounted at /api by app.ts). */
 export function apiRoutes(ctx: AppContext): Router {
@@ -25,5 +26,6 @@ export function apiRoutes(ctx: AppContext): Router {
   r.use(commentsRouter());
   r.use(activityRouter());
   r.use(libraryRouter());
+  r.use(solveRouter());
   return r;
 }

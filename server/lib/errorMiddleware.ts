@@ -1,5 +1,6 @@
 /** The one error middleware: typed errors → status + `{ error: { code, message, details } }`, anything else → 500 without internals. */
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { EngineInputError } from '@shared/engine/errors';
 import { AppError } from './errors';
 import type { Logger } from './logger';
 
@@ -21,6 +22,10 @@ export function errorMiddleware(logger: Logger): ErrorRequestHandler {
     }
     if (err instanceof AppError) {
       res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details ?? null } });
+      return;
+    }
+    if (err instanceof EngineInputError) {
+      res.status(400).json({ error: { code: 'engine_input', message: err.message, details: { issues: err.issues } } });
       return;
     }
     const e = (err ?? {}) as HttpishError;

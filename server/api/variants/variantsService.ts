@@ -3,7 +3,7 @@ import type { Model } from '@shared/schemas/model';
 import type { VariantCopy, VariantCreate, VariantDetail, VariantSave } from '@shared/schemas/variants';
 import type { Access } from '../../lib/permissions';
 import { ConflictError, NotFoundError } from '../../lib/errors';
-import { fallbackModel } from '../../db/seeders/fallbackModel';
+import { starterModel } from './starterModel';
 import { recordActivity } from '../activity/activityRepository';
 import * as repo from './variantsRepository';
 import { toDetail } from './variantsMapper';
@@ -27,10 +27,10 @@ async function stale(a: Access, id: number, sent: number): Promise<ConflictError
   );
 }
 
-/** Create a variant from the given model, else from the assembly's first variant, else the starter model. */
+/** Create a variant from the given model, else from the assembly's first variant, else a starter model. */
 export async function create(a: Access, input: VariantCreate): Promise<VariantDetail> {
   const first = input.model ? null : await repo.firstVariant(a.assemblyId!);
-  const model: Model = input.model ?? (first ? (JSON.parse(first.model) as Model) : fallbackModel());
+  const model: Model = input.model ?? (first ? (JSON.parse(first.model) as Model) : starterModel());
   const id = await repo.inTransaction((t) =>
     repo.insertVariant(
       { assemblyId: a.assemblyId!, name: input.name, note: input.note, model, userId: a.userId },

@@ -1,7 +1,8 @@
-/** What the demo seed puts into the demo workspace: project, assembly, variants and materials. */
+/** What the demo seed puts into the demo workspace: project, assembly, the three LX-9 variants and the materials (from shared/demo). */
 import type { Model } from '@shared/schemas/model';
 import type { MaterialCreate } from '@shared/schemas/library';
-import { fallbackModel } from './fallbackModel';
+import { lx9Variants } from '@shared/demo/lx9';
+import { DEMO_MATERIALS } from '@shared/demo/materials';
 
 /** Name + note of a seeded record. */
 export interface Named {
@@ -17,23 +18,24 @@ export interface DemoContent {
   materials: MaterialCreate[];
 }
 
-/** Handbook values (Incropera et al., Fundamentals of Heat and Mass Transfer, 7th ed., Table A.1, near 300 K). */
-const handbookMaterials: MaterialCreate[] = [
-  { name: 'Silicon', kxy: 148, kz: 148, rho: 2330, cp: 712, source: 'Incropera 7th ed., Table A.1 (300 K)', kind: 'handbook' },
-  { name: 'Copper (pure)', kxy: 401, kz: 401, rho: 8933, cp: 385, source: 'Incropera 7th ed., Table A.1 (300 K)', kind: 'handbook' },
-];
+const notes: Record<'A' | 'B' | 'C', string> = {
+  A: 'Starting placement: memory stacks flank each compute chiplet.',
+  B: 'All memory stacks on one side of the compute pair.',
+  C: 'Same order as A with wider gaps between compute and memory.',
+};
 
-/** The demo content; the three LX-9 variants come from shared/demo once that module exists. */
+/** The demo content (invented data: see shared/demo). */
 export function demoContent(): DemoContent {
-  const model = fallbackModel();
   return {
-    project: { name: 'LX-9 accelerator module', description: 'Invented demo: two compute chiplets, an I/O die and four memory stacks on a silicon interposer.' },
-    assembly: { name: 'LX-9 package', description: '46 × 34 mm interposer under a copper lid with a cold plate.' },
-    variants: [
-      { name: 'A — memory flanking compute', note: 'Starting placement.', model },
-      { name: 'B — memory on one side', note: 'Memory stacks moved to one edge.', model },
-      { name: 'C — wider gaps', note: 'More space between compute and memory.', model },
-    ],
-    materials: handbookMaterials,
+    project: {
+      name: 'LX-9 accelerator module',
+      description: 'Invented demo: two compute chiplets, an I/O die, four memory stacks and a bridge on a silicon interposer.',
+    },
+    assembly: { name: 'LX-9 package', description: '46 × 34 mm silicon interposer under a 2 mm copper lid with a cold plate.' },
+    variants: lx9Variants().map((v) => ({ name: v.name, note: notes[v.id], model: v.model })),
+    materials: DEMO_MATERIALS.map((m) => ({
+      name: m.name, kxy: m.kxy, kz: m.kz, rho: m.rho, cp: m.cp, source: m.source,
+      kind: m.source.startsWith('common practice') ? 'common-practice' : 'handbook',
+    })),
   };
 }

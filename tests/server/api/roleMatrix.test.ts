@@ -27,6 +27,13 @@ const created: [number, number, number] = [201, 201, 403];
 const ownerOnly: [number, number, number] = [200, 403, 403];
 const gone: [number, number, number] = [204, 204, 403];
 
+const channelBody = {
+  footprint: { x: 0.01, y: 0.01 },
+  above: { layers: [{ thickness: 5e-4, k: 150 }], h: 5000 },
+  below: { layers: [], h: 0 },
+  sources: [{ x: 0.005, y: 0.005, width: 0.002, height: 0.002, power: 1 }],
+};
+
 const currentVersion = async (f: Fixture, path: string) => (await f.owner.get(path)).body;
 
 const cases: Case[] = [
@@ -75,6 +82,13 @@ const cases: Case[] = [
   { method: 'post', route: 'POST /workspaces/:wid/part-templates', path: (f) => `/api/workspaces/${f.wid}/part-templates`, body: () => ({ name: 'Chiplet 10 mm', part: templatePart }), expect: created },
   { method: 'patch', route: 'PATCH /part-templates/:id', path: async (f) => `/api/part-templates/${await f.freshPartTemplate()}`, body: () => ({ note: 'checked' }), expect: design },
   { method: 'del', route: 'DELETE /part-templates/:id', path: async (f) => `/api/part-templates/${await f.freshPartTemplate()}`, expect: gone },
+  { method: 'post', route: 'POST /solve/channel', path: () => '/api/solve/channel', body: () => channelBody, expect: all, outsider: 200 },
+  { method: 'post', route: 'POST /variants/:vid/solve', path: (f) => `/api/variants/${f.vid}/solve`, body: () => ({ scenarioId: 'idle' }), expect: design },
+  {
+    method: 'get', route: 'GET /variants/:vid/results',
+    path: async (f) => { await f.owner.post(`/api/variants/${f.vid}/solve`, { scenarioId: 'idle' }); return `/api/variants/${f.vid}/results?scenarioId=idle`; },
+    expect: all,
+  },
 ];
 
 let t: TestApp;

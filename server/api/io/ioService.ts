@@ -1,0 +1,100 @@
+/** Import/export logic: solves for the CSV and netlist exports, validation of imports before anything is saved. */
+import { solveAssembly } from '@shared/engine/assembly/solve';
+import type { AssemblyResult } from '@shared/engine/assembly/result';
+import { ImpedanceCache } from '@shared/engine/cache';
+import { EngineInputError } from '@shared/engine/errors';
+import type { Model } from '@shared/schemas/model';
+import {
+  compactModel, floorplanToModel, matrixCsv, modelToJson, readFloorplanCsv, readModelFile, readModelObject, temperaturesCsv, writeNetlist,
+  type MatrixKind,
+} from '@shared/export';
+import type { VariantDetail } from '@shared/schemas/variants';
+import type { Access } from '../../lib/permissions';
+import { NotFoundError, ValidationError } from '../../lib/errors';
+import * as variantsService from '../variants/variantsService';
+import * as repo from './ioRepository';
+
+/** Map side used for export solves (maps are not exported; the smallest sensible grid). */
+const EXPORT_MAP_SIZE = 16;
+
+async function stored(id: number): Promise<repo.StoredVariant> {
+  const v = await repo.loadVariant(id);
+  if (!v) throw new NotFoundError('Variant');
+  return v;
+}
+
+function solve(model: Model, scenario: string | undefined, cache: ImpedanceCache): AssemblyResult {
+  try {
+    return solveAssembly(model, scenario, { mapSize: EXPORT_MAP_SIZE, cache });
+  } catch (e) {
+    if (e instanceof EngineInputError) throw new ValidationError(e.issues.map((i) => ({ path: i.path, message: i.message })), e.message);
+    throw e;
+  }
+}
+
+/** A file name stem from the variant's name: lower case letters, digits and dashes. */
+export function fileStem(v: repo.StoredVariant): string {
+  return (v.source.variant ?? `variant-${v.id}`).toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || `variant-${v.id}`;
+}
+
+/** The model JSON file of a variant. */
+export async function modelFile(id: number): Promise<{ stem: string; body: string }> {
+  const v = await stored(id);
+  return { stem: fileStem(v), body: modelToJson(v.model, v.source) };
+}
+
+/** A matrix CSV of one scenario (the first when absent). */
+export async function matrixFile(id: number, kind: MatrixKind, scenario?: string): Promise<{ stem: string; body: string }> {
+  const v = await stored(id);
+  return { stem: fileStem(v), body: matrixCsv(solve(v.model, scenario, new ImpedanceCache()), kind) };
+}
+
+/** The temperature table of one scenario, or of every scenario when absent. */
+export async function temperaturesFile(id: number, scenario?: string): Promise<{ stem: string; body: string }> {
+  const v = await stored(id);
+  const cache = new ImpedanceCache();
+  const ids = scenario ? [scenario] : v.model.scenarios.map((s) => s.id);
+  return { stem: fileStem(v), body: temperaturesCsv(ids.map((s) => solve(v.model, s, cache))) };
+}
+
+/** The SPICE netlist of the compact model for one scenario (steady matrix: no assembly transient fit is available yet). */
+export async function netlistFile(id: number, scenario?: string): Promise<{ stem: string; body: string }> {
+  const v = await stored(id);
+  const result = solve(v.model, scenario, new ImpedanceCache());
+  return { stem: fileStem(v), body: writeNetlist(compactModel(result), { source: v.source }) };
+}
+
+function issuesError(issues: { path: string; message: string }[], what: string): ValidationError {
+  return new ValidationError(issues, `The ${what} cannot be imported: ${issues.length} problem(s) found. Nothing was saved.`);
+}
+
+/** Validate a model file (text or parsed object) and store it as a new variant of the assembly. */
+export async function importModel(a: Access, input: { text?: string | null; model?: unknown; name?: string; note: string; filename?: string | null }): Promise<VariantDetail> {
+  if (input.text == null && input.model === undefined) throw new ValidationError([{ path: 'file', message: 'Attach a model file (.json).' }]);
+  const read = input.text != null ? readModelFile(input.text) : readModelObject(input.model);
+  if (!read.ok) throw issuesError(read.issues, 'model file');
+  const from = read.header?.source;
+  const name = input.name ?? (from?.variant ? `${from.variant} (imported)`.slice(0, 120) : 'Imported variant');
+  const origin = input.filename ? `file ${input.filename}` : 'a model file';
+  const id = await repo.insertImported(
+    { assemblyId: a.assemblyId!, projectId: a.projectId!, userId: a.userId },
+    { name, note: input.note, model: read.model, summary: `imported variant "${name}" from ${origin}` },
+  );
+  return variantsService.detail(a, id);
+}
+
+/** Validate a floorplan CSV, apply it to a base variant of the assembly and store the result as a new variant. */
+export async function importFloorplan(a: Access, input: { csv?: string | null; name?: string; note: string; baseVariantId?: number; filename?: string | null }): Promise<VariantDetail> {
+  if (input.csv == null) throw new ValidationError([{ path: 'file', message: 'Attach a floorplan file (.csv).' }]);
+  const plan = readFloorplanCsv(input.csv);
+  if (plan.errors.length) throw issuesError(plan.errors.slice(0, 50).map((e) => ({ path: `line ${e.line}${e.column ? `, ${e.column}` : ''}`, message: e.message })), 'floorplan');
+  const base = await repo.baseModel(a.assemblyId!, input.baseVariantId);
+  if (!base) throw new NotFoundError('Base variant');
+  const model = floorplanToModel(base, plan.parts);
+  const name = input.name ?? 'Floorplan import';
+  const id = await repo.insertImported(
+    { assemblyId: a.assemblyId!, projectId: a.projectId!, userId: a.userId },
+    { name, note: input.note, model, summary: `imported variant "${name}" from floorplan ${input.filename ?? 'CSV'} (${plan.parts.length} parts)` },
+  );
+  return variantsService.detail(a, id);
+}

@@ -1,0 +1,31 @@
+/** Analyses: the stateless flux-channel solve and stored per-variant solves. */
+import { Router } from 'express';
+import { solveChannelRequest } from '@shared/engine';
+import { variantSolveSchema } from '@shared/schemas/solve';
+import { authorize, requireUserId } from '../../lib/permissions';
+import { validate } from '../../lib/validate';
+import { solveVariant, storedVariantResult } from './solveService';
+
+/** Build the solve router. */
+export function solveRouter(): Router {
+  const r = Router();
+
+  r.post('/solve/channel', (req, res) => {
+    requireUserId(req);
+    res.json(solveChannelRequest(req.body));
+  });
+
+  r.post('/variants/:vid/solve', async (req, res) => {
+    const a = await authorize(req, 'variant', req.params.vid, 'analysis.run');
+    const { scenarioId } = validate(variantSolveSchema, req.body);
+    res.json(await solveVariant(a, a.variantId!, scenarioId));
+  });
+
+  r.get('/variants/:vid/results', async (req, res) => {
+    const a = await authorize(req, 'variant', req.params.vid, 'workspace.read');
+    const { scenarioId } = validate(variantSolveSchema, req.query);
+    res.json(await storedVariantResult(a.variantId!, scenarioId));
+  });
+
+  return r;
+}
