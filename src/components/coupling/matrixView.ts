@@ -3,7 +3,7 @@
  * stack), columns "heated by" (parts). Three views of the same influence coefficients
  * (physics.md §2): R_ij in K/W; R_ij as % of the row's own R_ii; and R_ij·P_j in K for the scenario.
  */
-import type { AssemblyResult } from '@shared/engine/assembly/result';
+import type { AssemblyResult } from '@shared/engine';
 
 /** Which number the cells show. */
 export type MatrixMode = 'resistance' | 'percent' | 'kelvin';

@@ -1,5 +1,5 @@
 /** A small hand-made assembly result (invented numbers) for component tests: two logic parts and a two-tier memory stack. */
-import type { AssemblyResult, PartResult } from '@shared/engine/assembly/result';
+import type { AssemblyResult, PartResult } from '@shared/engine';
 
 const map = (value: number) => ({ nx: 2, ny: 2, x0: 0, y0: 0, dx: 0.01, dy: 0.01, values: [value, value + 1, value + 2, value + 3] });
 
