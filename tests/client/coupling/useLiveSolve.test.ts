@@ -28,7 +28,7 @@ function setup() {
   const violations = ref<RuleViolation[]>([]);
   const worker = new FakeWorker();
   const scope = effectScope();
-  const live = scope.run(() => createLiveSolve({ model, scenarioId, violations }, { createWorker: () => worker }))!;
+  const live = scope.run(() => createLiveSolve({ model, scenarioId, violations }, { createWorker: () => worker, refineDelay: 20 }))!;
   return { model, scenarioId, violations, worker, live, scope };
 }
 
@@ -59,6 +59,25 @@ describe('useLiveSolve', () => {
     worker.answer();
     expect(live.stale.value).toBe(false);
     expect(worker.posted).toHaveLength(2);
+  });
+
+  test('quick successive changes get a draft solve, refined at full map size after a pause', async () => {
+    const { worker, live, model } = setup();
+    expect(worker.posted[0].mapSize).toBe(128);
+    worker.answer();
+    model.value = move(model.value);
+    await nextTick();
+    model.value = move(model.value);
+    await nextTick();
+    worker.answer();
+    expect(worker.posted[1].mapSize).toBe(32);
+    worker.answer();
+    expect(live.draft.value).toBe(true);
+    expect(live.stale.value).toBe(false);
+    await new Promise((r) => setTimeout(r, 60));
+    expect(worker.posted.map((j) => j.mapSize)).toEqual([128, 32, 32, 128]);
+    worker.answer();
+    expect(live.draft.value).toBe(false);
   });
 
   test('a rule violation stops solving and marks the shown result stale', async () => {

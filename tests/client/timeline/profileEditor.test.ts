@@ -29,7 +29,7 @@ describe('ProfileEditor', () => {
     const w = mountEditor();
     const part = w.find('[data-test="part-profile-cpu-w"]');
     expect(part.text()).toContain('1 segment, 4 s');
-    const values = part.findAllComponents(NInputNumber).map((c) => c.props('value'));
+    const values = part.findAllComponents(NInputNumber).map((c) => (c.props as (k: string) => unknown)('value'));
     expect(values).toEqual([145, 35, 50, 50, 40]);
   });
 
