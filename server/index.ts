@@ -9,7 +9,9 @@ async function main(): Promise<void> {
   const { logger } = built;
   const server = built.app.listen(config.port, config.host, () => {
     const shown = config.host === '0.0.0.0' ? 'localhost' : config.host;
-    logger.info(`Heatloom is running at http://${shown}:${config.port} (data in ${config.dataDir})`);
+    const address = server.address();
+    const port = typeof address === 'object' && address ? address.port : config.port;
+    logger.info(`Heatloom is running at http://${shown}:${port} (data in ${config.dataDir})`);
     if (built.fakeSmtpPort !== null) logger.info(`Local SMTP server on port ${built.fakeSmtpPort}; owners read its outbox in the app.`);
     logger.info(`Demo sign-in: ${demoUsers.engineer.email} / ${demoUsers.engineer.password} (see README for the other demo users)`);
   });
