@@ -11,3 +11,4 @@ export { readPowerMapCsv, powerMapToCsv, POWER_MAP_MAX_SIDE, POWER_MAP_NOTE, typ
 export { compactModel, type CompactModel, type CompactNode } from './compactModel';
 export { writeNetlist, type NetlistOptions } from './netlist';
 export { spiceStems, asciiText, commentBlock, spiceNumber } from './spiceNames';
+export { UPLOAD_LIMIT_BYTES, matrixQuerySchema, scenarioQuerySchema, modelImportSchema, floorplanImportSchema, csvPreviewSchema, type FloorplanPreview, type PowerMapPreview } from './requests';
