@@ -10,7 +10,6 @@ import type { SimulationResult, TimingAnswers, TimingRequest } from '@shared/eng
 import { createJobRunner, JobCancelledError, type JobRunner } from '@/components/timeline/jobRunner';
 import { networkKey } from '@/components/timeline/nodes';
 import type { ImpedanceResult, TransientWorkerLike } from '@/components/timeline/protocol';
-import { IMPEDANCE_TIMES } from '@/components/timeline/timeScale';
 
 /** What the transient state follows. */
 export interface TransientSource {
@@ -44,7 +43,7 @@ export function useTransient(source: TransientSource, createWorker?: () => Trans
   const ready = computed(() => !!impedance.value && !stale.value);
 
   /** Compute the impedance of the current model (restarts a running computation). */
-  async function computeImpedance(times: number[] = IMPEDANCE_TIMES): Promise<void> {
+  async function computeImpedance(count = 60): Promise<void> {
     const model = source.model.value;
     if (!model) return;
     if (computing.value) heavy.cancel();
@@ -52,7 +51,7 @@ export function useTransient(source: TransientSource, createWorker?: () => Trans
     progress.value = 0;
     impedanceError.value = null;
     try {
-      const reply = await heavy.run({ kind: 'impedance', model: toRaw(model), times }, (f) => (progress.value = f));
+      const reply = await heavy.run({ kind: 'impedance', model: toRaw(model), count }, (f) => (progress.value = f));
       impedance.value = reply.result;
       impedanceKey.value = key;
       impedanceMs.value = reply.ms;
@@ -77,7 +76,7 @@ export function useTransient(source: TransientSource, createWorker?: () => Trans
     simulating.value = true;
     simulationError.value = null;
     try {
-      const params = { network: imp.network, baseTemperatures: imp.baseTemperatures, model: toRaw(model), scenarioId: source.scenarioId.value ?? '', feedback, samplesPerInterval };
+      const params = { network: imp.network, baseTemperatures: imp.baseTemperatures, nodeSteady: imp.nodeSteady, model: toRaw(model), scenarioId: source.scenarioId.value ?? '', feedback, samplesPerInterval };
       const reply = await light.run({ kind: 'simulate', params });
       simulation.value = reply.result;
       simulationMs.value = reply.ms;

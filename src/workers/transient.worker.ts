@@ -28,7 +28,7 @@ scope.onmessage = (event) => {
   };
   const ms = () => performance.now() - t0;
   try {
-    if (req.kind === 'impedance') scope.postMessage({ job, kind: 'impedance', result: impedanceJob(req.model, req.times, { onProgress }), ms: ms() });
+    if (req.kind === 'impedance') scope.postMessage({ job, kind: 'impedance', result: impedanceJob(req.model, req.count, { onProgress }), ms: ms() });
     else if (req.kind === 'simulate') scope.postMessage({ job, kind: 'simulate', result: simulateJob(req.params, { onProgress }), ms: ms() });
     else if (req.kind === 'timing') scope.postMessage({ job, kind: 'timing', result: timingJob(req.params), ms: ms() });
     else scope.postMessage({ job, kind: 'coupling', result: couplingJob(req.model, req.scenarioId, memo, cache), ms: ms() });

@@ -42,10 +42,41 @@ export function scenarioNodePowers(model: Model, scenario: Scenario | undefined)
   });
 }
 
-/** Segments per node: a part's profile drives its die node; other nodes keep the scenario power. */
-export function nodeSegments(model: Model, scenario: Scenario): (Segment[] | undefined)[] {
+/**
+ * The heat sources of the impedance, in the engine's order (transient/impedanceSources.ts, 'parts'):
+ * per part its die node, then for a memory stack one source spreading evenly over its DRAM tiers.
+ */
+export interface TimelineSource {
+  partId: string;
+  kind: 'junction' | 'tiers';
+  /** Row of its own node (die node; first tier for the tiers source). */
+  node: number;
+  /** The engine's label ("cpu-w", "mem-1/tiers"). */
+  key: string;
+}
+
+/** Sources of a model in engine order. */
+export function timelineSources(model: Model): TimelineSource[] {
+  const out: TimelineSource[] = [];
+  timelineNodes(model).forEach((n) => {
+    if (n.tier === 0) out.push({ partId: n.partId, kind: 'junction', node: n.index, key: n.partId });
+    if (n.tier === 1) out.push({ partId: n.partId, kind: 'tiers', node: n.index, key: `${n.partId}/tiers` });
+  });
+  return out;
+}
+
+/** Node powers → source powers: die nodes as they are, tiers summed per stack. */
+export function toSourcePowers(model: Model, nodePowers: readonly number[]): number[] {
+  const nodes = timelineNodes(model);
+  return timelineSources(model).map((s) =>
+    s.kind === 'junction' ? nodePowers[s.node] : nodes.reduce((sum, n, j) => (n.partId === s.partId && n.tier > 0 ? sum + nodePowers[j] : sum), 0),
+  );
+}
+
+/** Segments per source: a part's profile drives its die; tiers keep the scenario power. */
+export function sourceSegments(model: Model, scenario: Scenario): (Segment[] | undefined)[] {
   const parts = scenario.profile?.parts ?? {};
-  return timelineNodes(model).map((n) => (n.tier === 0 ? parts[n.partId] : undefined));
+  return timelineSources(model).map((s) => (s.kind === 'junction' ? parts[s.partId] : undefined));
 }
 
 /** A key that changes only when the thermal network changes (stack-up and geometry, not loads). */

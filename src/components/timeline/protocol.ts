@@ -1,14 +1,21 @@
 /** Messages between useTransient / useElectroThermal and the transient worker (structured-clone safe). */
 import type { Model } from '@shared/schemas/model';
 import type { CouplingResult } from '@shared/engine/electrothermal';
-import type { FosterNetwork, FosterNetworkFit, SimulationResult, TimingAnswers, TimingRequest } from '@shared/engine/transient';
+import type { FosterNetwork, FosterNetworkFit, ImpedanceChecks, SimulationResult, TimingAnswers, TimingRequest } from '@shared/engine/transient';
 
-/** Node-level impedance of a model and its Foster fit. Z[k][j][i]: rise of node j at times[k] per W stepped in node i (K/W). */
+/** Impedance of a model and its Foster fit. Z[k][j][i]: rise of node j at times[k] per W stepped in source i (K/W). */
 export interface ImpedanceResult {
   times: number[];
   Z: number[][][];
-  /** Steady influence matrix (K/W). */
+  /** Steady matrix nodes × sources (K/W). */
   steady: number[][];
+  /** Node-level steady influence matrix (K/W), for coupled start states. */
+  nodeSteady: number[][];
+  /** The engine's source labels ("cpu-w", "mem-1/tiers"). */
+  sourceKeys: string[];
+  /** Time after which every response has settled (s). */
+  settleTime: number;
+  checks: ImpedanceChecks;
   /** Node temperatures with no power (the fluid offsets), °C. */
   baseTemperatures: number[];
   fit: Omit<FosterNetworkFit, 'network'>;
@@ -21,6 +28,7 @@ export interface ImpedanceResult {
 export interface SimulateParams {
   network: FosterNetwork;
   baseTemperatures: number[];
+  nodeSteady: number[][];
   model: Model;
   scenarioId: string;
   /** Apply leakage / Joule feedback (P(T) at each step). */
@@ -37,7 +45,7 @@ export interface TimingParams {
 
 /** A job for the transient worker. */
 export type TransientRequest =
-  | { job: number; kind: 'impedance'; model: Model; times: number[] }
+  | { job: number; kind: 'impedance'; model: Model; count: number }
   | { job: number; kind: 'simulate'; params: SimulateParams }
   | { job: number; kind: 'timing'; params: TimingParams }
   | { job: number; kind: 'coupling'; model: Model; scenarioId: string };

@@ -1,12 +1,4 @@
-/** Time sampling and time-axis labels of the Timeline screen (s inside, µs / ms / s / min on screen). */
-
-/** Log-spaced sample times (s) from t0 to t1, both included. */
-export function logTimes(t0: number, t1: number, count: number): number[] {
-  return Array.from({ length: count }, (_, k) => t0 * (t1 / t0) ** (k / (count - 1)));
-}
-
-/** Default impedance times: 60 points from 1 µs to 2000 s (the board side of the demo settles in minutes). */
-export const IMPEDANCE_TIMES = logTimes(1e-6, 2000, 60);
+/** Time-axis units and labels of the Timeline screen (s inside, µs / ms / s / min on screen). */
 
 /** The display unit for a time span: its name and seconds per unit. */
 export function timeUnit(span: number): { unit: string; scale: number } {
