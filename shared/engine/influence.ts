@@ -35,8 +35,8 @@ export function richardson(m: number, n: number): { hm: number; hn: number; fact
 }
 
 /**
- * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]). Rows of W are the outer loop so each
- * row stays in cache while every pair uses it; the half level (Richardson) is summed in the same pass.
+ * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]); the half level (Richardson) is summed
+ * in the same pass over each row of W.
  */
 function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMode): Float64Array {
   const { fx, fy, m: mm, n: nn } = sp;
@@ -44,33 +44,32 @@ function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMo
   const count = pairs.length / 2;
   const w = table.w;
   const stride = table.n;
-  const yprod = new Float64Array(count * nn);
+  const yprod = new Float64Array(nn);
+  const out = new Float64Array(count);
   for (let k = 0; k < count; k++) {
+    const xi = pairs[2 * k] * mm;
+    const xj = pairs[2 * k + 1] * mm;
     const yi = pairs[2 * k] * nn;
     const yj = pairs[2 * k + 1] * nn;
-    for (let q = 0; q < nn; q++) yprod[k * nn + q] = fy[yi + q] * fy[yj + q];
-  }
-  const full = new Float64Array(count);
-  const half = new Float64Array(count);
-  for (let p = 0; p < mm; p++) {
-    const row = p * stride;
-    for (let k = 0; k < count; k++) {
-      const xp = fx[pairs[2 * k] * mm + p] * fx[pairs[2 * k + 1] * mm + p];
+    for (let q = 0; q < nn; q++) yprod[q] = fy[yi + q] * fy[yj + q];
+    let full = 0;
+    let half = 0;
+    for (let p = 0; p < mm; p++) {
+      const xp = fx[xi + p] * fx[xj + p];
       if (xp === 0) continue;
-      const yk = k * nn;
+      const row = p * stride;
       let inner = 0;
       let q = 0;
       if (p < hm) {
-        for (; q < hn; q++) inner += w[row + q] * yprod[yk + q];
-        half[k] += xp * inner;
+        for (; q < hn; q++) inner += w[row + q] * yprod[q];
+        half += xp * inner;
       }
-      for (; q < nn; q++) inner += w[row + q] * yprod[yk + q];
-      full[k] += xp * inner;
+      for (; q < nn; q++) inner += w[row + q] * yprod[q];
+      full += xp * inner;
     }
+    out[k] = mode === 'raw' ? full : full + (full - half) * factor;
   }
-  if (mode === 'raw') return full;
-  for (let k = 0; k < count; k++) full[k] += (full[k] - half[k]) * factor;
-  return full;
+  return out;
 }
 
 /** Full symmetric influence matrix (K/W), row-major count × count: [j·count + i] = rise of j per W in i. */

@@ -1,7 +1,8 @@
 /**
  * Automatic choice of the modal truncation (physics.md §1): start near 20·L / (smallest source side)
  * per axis and double until the self-resistances — the largest entries of the influence matrix —
- * change by less than the tolerance relative to the largest. The error falls roughly as 1/M²; the
+ * change by less than the tolerance relative to the largest; the level whose doubling changed that little
+ * is the one used. The error falls roughly as 1/M²; the
  * values compared are the Richardson-finished sums of influence.ts (each level uses its half level).
  */
 import { ImpedanceCache } from './cache';
@@ -55,7 +56,7 @@ function largestChange(next: Float64Array, prev: Float64Array): number {
   return largest > 0 ? change / largest : 0;
 }
 
-/** Double the truncation until the self-resistances settle; returns the table of the final level. */
+/** Double the truncation until the self-resistances settle; returns the level used and a table covering it. */
 export function autoTruncation(
   channel: Channel,
   sources: readonly RectSource[],
@@ -73,13 +74,15 @@ export function autoTruncation(
   let prev = selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n));
   let lastChange = Infinity;
   for (let k = 0; k < CHANNEL_DEFAULTS.maxDoublings && 4 * m * n <= settings.maxModes; k++) {
+    const finer = cache.table(channel, 2 * m, 2 * n, settings.s);
+    const next = selfInfluenceFromSpectra(finer, buildSpectra(channel, sources, 2 * m, 2 * n));
+    lastChange = largestChange(next, prev);
+    // Converged: doubling changes nothing that matters, so the current level is kept (the finer table stays cached).
+    if (lastChange < settings.tolerance) break;
     m *= 2;
     n *= 2;
-    table = cache.table(channel, m, n, settings.s);
-    const next = selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n));
-    lastChange = largestChange(next, prev);
+    table = finer;
     prev = next;
-    if (lastChange < settings.tolerance) break;
   }
   if (lastChange === Infinity) {
     // The cap allowed one level only: the size of its Richardson correction bounds its error.

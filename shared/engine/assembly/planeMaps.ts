@@ -34,6 +34,6 @@ export function sampleMap(map: PlacedMap, x: number, y: number): number {
   const tx = fx - ix;
   const ty = fy - iy;
   const v = map.values;
-  const at = (i: number, j: number): number => v[j * map.nx + i];
-  return (1 - ty) * ((1 - tx) * at(ix, iy) + tx * at(ix + 1, iy)) + ty * ((1 - tx) * at(ix, iy + 1) + tx * at(ix + 1, iy + 1));
+  const c = iy * map.nx + ix;
+  return (1 - ty) * ((1 - tx) * v[c] + tx * v[c + 1]) + ty * ((1 - tx) * v[c + map.nx] + tx * v[c + map.nx + 1]);
 }
