@@ -4,7 +4,7 @@
  *   GET  /variants/:vid/export.json                       model file (SI units, header with units and source)
  *   GET  /variants/:vid/export/matrix.csv?kind=&scenario=  influence | nodes | contribution matrix
  *   GET  /variants/:vid/export/temperatures.csv?scenario=  temperature table (all scenarios when absent)
- *   GET  /variants/:vid/export/netlist.cir?scenario=       SPICE netlist of the compact model
+ *   GET  /variants/:vid/export/netlist.cir?scenario=&model= SPICE netlist (model = auto | steady | foster)
  *   POST /assemblies/:aid/import                           model file → new variant (multipart "file" or JSON)
  *   POST /assemblies/:aid/import/floorplan                 floorplan CSV → new variant
  *   POST /import/floorplan/preview                         floorplan CSV → parts and line-numbered errors (saves nothing)
@@ -12,7 +12,7 @@
  */
 import { Router, type Response } from 'express';
 import {
-  csvPreviewSchema, floorplanImportSchema, matrixQuerySchema, modelImportSchema, readFloorplanCsv, readPowerMapCsv, scenarioQuerySchema,
+  csvPreviewSchema, floorplanImportSchema, matrixQuerySchema, modelImportSchema, netlistQuerySchema, readFloorplanCsv, readPowerMapCsv, scenarioQuerySchema,
   type FloorplanPreview, type PowerMapPreview,
 } from '@shared/export';
 import { authorize, requireUserId } from '../../lib/permissions';
@@ -56,8 +56,8 @@ export function ioRouter(): Router {
 
   r.get('/variants/:vid/export/netlist.cir', async (req, res) => {
     const a = await authorize(req, 'variant', req.params.vid, 'workspace.read');
-    const q = validate(scenarioQuerySchema, req.query);
-    sendFile(res, await service.netlistFile(a.variantId!, q.scenario), '.cir', 'cir');
+    const q = validate(netlistQuerySchema, req.query);
+    sendFile(res, await service.netlistFile(a.variantId!, q.scenario, q.model), `${q.model === 'steady' ? '-steady' : ''}.cir`, 'cir');
   });
 
   r.post('/assemblies/:aid/import', async (req, res) => {

@@ -5,7 +5,7 @@ import { ImpedanceCache } from '@shared/engine/cache';
 import { EngineInputError } from '@shared/engine/errors';
 import type { Model } from '@shared/schemas/model';
 import {
-  compactModel, floorplanToModel, matrixCsv, modelToJson, readFloorplanCsv, readModelFile, readModelObject, temperaturesCsv, writeNetlist,
+  floorplanToModel, matrixCsv, modelToJson, readFloorplanCsv, readModelFile, readModelObject, temperaturesCsv, writeNetlist,
   type MatrixKind,
 } from '@shared/export';
 import type { VariantDetail } from '@shared/schemas/variants';
@@ -13,6 +13,7 @@ import type { Access } from '../../lib/permissions';
 import { NotFoundError, ValidationError } from '../../lib/errors';
 import * as variantsService from '../variants/variantsService';
 import * as repo from './ioRepository';
+import { netlistModel, type NetlistKind } from './netlistModel';
 
 /** Map side used for export solves (maps are not exported; the smallest sensible grid). */
 const EXPORT_MAP_SIZE = 16;
@@ -57,11 +58,16 @@ export async function temperaturesFile(id: number, scenario?: string): Promise<{
   return { stem: fileStem(v), body: temperaturesCsv(ids.map((s) => solve(v.model, s, cache))) };
 }
 
-/** The SPICE netlist of the compact model for one scenario (steady matrix: no assembly transient fit is available yet). */
-export async function netlistFile(id: number, scenario?: string): Promise<{ stem: string; body: string }> {
+/** The SPICE netlist of the compact model for one scenario: Foster network when the transient exists (kind auto), else the steady matrix. */
+export async function netlistFile(id: number, scenario: string | undefined, kind: NetlistKind): Promise<{ stem: string; body: string }> {
   const v = await stored(id);
   const result = solve(v.model, scenario, new ImpedanceCache());
-  return { stem: fileStem(v), body: writeNetlist(compactModel(result), { source: v.source }) };
+  try {
+    return { stem: fileStem(v), body: writeNetlist(netlistModel(v.model, result, kind), { source: v.source }) };
+  } catch (e) {
+    if (e instanceof EngineInputError) throw new ValidationError(e.issues.map((i) => ({ path: i.path, message: i.message })), e.message);
+    throw e;
+  }
 }
 
 function issuesError(issues: { path: string; message: string }[], what: string): ValidationError {

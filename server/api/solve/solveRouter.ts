@@ -5,6 +5,7 @@ import { variantSolveSchema } from '@shared/schemas/solve';
 import { authorize, requireUserId } from '../../lib/permissions';
 import { validate } from '../../lib/validate';
 import { solveVariant, storedVariantResult } from './solveService';
+import { runEngine } from './runEngine';
 
 /** Build the solve router. */
 export function solveRouter(): Router {
@@ -12,7 +13,7 @@ export function solveRouter(): Router {
 
   r.post('/solve/channel', (req, res) => {
     requireUserId(req);
-    res.json(solveChannelRequest(req.body));
+    res.json(runEngine(() => solveChannelRequest(req.body)));
   });
 
   r.post('/variants/:vid/solve', async (req, res) => {

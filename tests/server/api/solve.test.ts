@@ -72,4 +72,16 @@ describe('POST /api/variants/:vid/solve', () => {
     expect(bad.status).toBe(400);
     expect(bad.body.error.details.issues[0].path).toBe('scenarioId');
   });
+
+  it('answers 400 (engine_input) for a model with no cooled face', async () => {
+    const id = await f.freshVariant();
+    const v = (await engineer.get(`/api/variants/${id}`)).body;
+    const model = structuredClone(v.model);
+    model.stack.cooling.top.h = 0;
+    model.stack.cooling.bottom.h = 0;
+    expect((await engineer.put(`/api/variants/${id}`, { model, version: v.version })).status).toBe(200);
+    const res = await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'idle' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('engine_input');
+  });
 });
