@@ -1,15 +1,15 @@
 /** Request and response shapes of invitations. */
 import { z } from 'zod';
-import { emailSchema, nameSchema, passwordSchema } from './common';
+import { emailSchema, passwordSchema } from './common';
 import { roleSchema } from './roles';
 
 /** POST /api/workspaces/:wid/invitations body. */
 export const invitationCreateSchema = z.object({ email: emailSchema, role: roleSchema });
 export type InvitationCreate = z.infer<typeof invitationCreateSchema>;
 
-/** POST /api/invitations/:token/accept body; name and password are ignored for an existing account's e-mail. */
+/** POST /api/invitations/:token/accept body; a new account needs a name, an existing account gives its own password (name ignored). */
 export const invitationAcceptSchema = z.object({
-  name: nameSchema.optional(),
+  name: z.string().trim().max(120).optional(),
   password: passwordSchema,
 });
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;

@@ -36,11 +36,14 @@ describe('invitations', () => {
     const token = await tokenFromOutbox(email);
 
     const guest = new Client(t.app);
+    await guest.csrf();
+    const noName = await guest.post(`/api/invitations/${token}/accept`, { name: '  ', password: 'a-good-long-password' });
+    expect(noName.status).toBe(400);
+    expect(noName.body.error.details.issues).toEqual([{ path: 'name', message: 'required' }]);
     const look = await guest.get(`/api/invitations/${token}`);
     expect(look.status).toBe(200);
     expect(look.body).toEqual({ workspaceName: 'Larkspur Compute (demo)', email, role: 'engineer', accountExists: false });
 
-    await guest.csrf();
     const accepted = await guest.post(`/api/invitations/${token}/accept`, { name: 'Noor Newcomer', password: 'a-good-long-password' });
     expect(accepted.status).toBe(200);
     expect(accepted.body.user.email).toBe(email);
@@ -99,8 +102,8 @@ describe('invitations', () => {
     const guest = new Client(t.app);
     expect((await guest.get(`/api/invitations/${token}`)).body.accountExists).toBe(true);
     await guest.csrf();
-    expect((await guest.post(`/api/invitations/${token}/accept`, { password: 'wrong-password-here' })).status).toBe(401);
-    const ok = await guest.post(`/api/invitations/${token}/accept`, { password: demoUsers.reviewer.password });
+    expect((await guest.post(`/api/invitations/${token}/accept`, { name: '', password: 'wrong-password-here' })).status).toBe(401);
+    const ok = await guest.post(`/api/invitations/${token}/accept`, { name: '', password: demoUsers.reviewer.password });
     expect(ok.status).toBe(200);
     expect(ok.body.memberships.map((m: { role: string }) => m.role)).toEqual(['reviewer']);
   });
