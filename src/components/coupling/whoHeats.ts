@@ -13,7 +13,7 @@ export interface HeatBar {
 /** Contributions below this (K) are summed into one "others" bar. */
 export const SMALL_SHARE = 0.05;
 
-/** Bars for part `partId`: self first, neighbours by size, small ones pooled; they sum to the rise. */
+/** Bars for part `partId`: self first, neighbours by size, small ones pooled, unpowered ones left out; they sum to the rise. */
 export function whoHeats(result: AssemblyResult, partId: string): { bars: HeatBar[]; rise: number; fluid: number; junction: number } | null {
   const i = result.influence.partIds.indexOf(partId);
   const part = result.parts[i];
@@ -24,7 +24,7 @@ export function whoHeats(result: AssemblyResult, partId: string): { bars: HeatBa
     .filter((_, j) => j !== i)
     .sort((a, b) => b.kelvin - a.kelvin);
   const big = others.filter((o) => Math.abs(o.kelvin) >= SMALL_SHARE);
-  const small = others.filter((o) => Math.abs(o.kelvin) < SMALL_SHARE);
+  const small = others.filter((o) => Math.abs(o.kelvin) < SMALL_SHARE && o.kelvin !== 0);
   const list = [{ id: part.id, name: 'Own heat', kelvin: row[i] }, ...big];
   if (small.length) list.push({ id: '_others', name: `${small.length} other part${small.length > 1 ? 's' : ''}`, kelvin: small.reduce((s, o) => s + o.kelvin, 0) });
   let start = 0;

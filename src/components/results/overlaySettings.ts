@@ -7,11 +7,11 @@ export interface OverlaySettings {
   /** Contributions below this are hidden, K. */
   threshold: number;
   badges: boolean;
-  /** Badge value: hot spot or mean junction temperature. */
-  badgeValue: 'peak' | 'junction';
+  /** Badge value: the temperature the limit check uses, the hot spot, or the mean junction temperature. */
+  badgeValue: 'checked' | 'peak' | 'junction';
 }
 
-/** Defaults: badges on (peak), no arrows (2 K threshold when switched on), no map. */
+/** Defaults: badges on (checked temperature), no arrows (2 K threshold when switched on), no map. */
 export function defaultOverlaySettings(): OverlaySettings {
-  return { plane: 'off', arrows: false, threshold: 2, badges: true, badgeValue: 'peak' };
+  return { plane: 'off', arrows: false, threshold: 2, badges: true, badgeValue: 'checked' };
 }

@@ -17,6 +17,9 @@ export interface FigureRow {
   self: number | null;
   share: number | null;
   up: number | null;
+  down: number | null;
+  /** Memory stacks: the base die's hot spot is shown, but the DRAM limit is checked on the mean temperatures. */
+  peakInfo: boolean;
   children?: FigureRow[];
 }
 
@@ -32,9 +35,11 @@ export function figureRows(result: AssemblyResult): FigureRow[] {
     margin: p.margin,
     self: p.selfResistance,
     share: p.couplingShare,
-    up: p.power > 0 ? p.heatUp / p.power : null,
+    up: p.heatUp,
+    down: p.heatDown,
+    peakInfo: p.kind === 'memory',
     children: p.tiers.length
-      ? p.tiers.map((t) => ({ key: `${p.id}#${t.tier}`, name: `Tier ${t.tier}`, power: t.power, mean: t.temperature, peak: null, limit: p.limit.toFixed(0), margin: p.limit - t.temperature, self: null, share: null, up: null }))
+      ? p.tiers.map((t) => ({ key: `${p.id}#${t.tier}`, name: `Tier ${t.tier}`, power: t.power, mean: t.temperature, peak: null, limit: p.limit.toFixed(0), margin: p.limit - t.temperature, self: null, share: null, up: null, down: null, peakInfo: false }))
       : undefined,
   }));
 }
@@ -53,12 +58,16 @@ export function figureColumns(): DataTableColumns<FigureRow> {
   return [
     { title: 'Part', key: 'name', fixed: 'left', minWidth: 170 },
     { title: 'Power (W)', key: 'power', ...right, render: (r) => num(r.power, r.power < 10 ? 2 : 1), sorter: (a, b) => a.power - b.power },
-    { title: 'Mean T (°C)', key: 'mean', ...right, render: (r) => num(r.mean, 1), sorter: (a, b) => a.mean - b.mean },
-    { title: 'Peak T (°C)', key: 'peak', ...right, render: (r) => num(r.peak, 1), sorter: (a, b) => (a.peak ?? a.mean) - (b.peak ?? b.mean) },
+    { title: 'Mean Tj (°C)', key: 'mean', ...right, render: (r) => num(r.mean, 1), sorter: (a, b) => a.mean - b.mean },
+    {
+      title: 'Hot spot (°C)', key: 'peak', ...right, sorter: (a, b) => (a.peak ?? a.mean) - (b.peak ?? b.mean),
+      render: (r) => (r.peakInfo ? h('span', { class: 'hl-muted', title: 'Base-die hot spot; the DRAM limit is checked on the die and tier means' }, num(r.peak, 1)) : num(r.peak, 1)),
+    },
     { title: 'Limit (°C)', key: 'limit', ...right },
     { title: 'Margin (K)', key: 'margin', ...right, render: (r) => marginPill(r.margin), sorter: (a, b) => a.margin - b.margin, defaultSortOrder: false },
     { title: 'Self R (K/W)', key: 'self', ...right, render: (r) => num(r.self, 3), sorter: (a, b) => (a.self ?? 0) - (b.self ?? 0) },
     { title: 'Coupling share', key: 'share', ...right, render: (r) => (r.share === null ? '' : `${(r.share * 100).toFixed(0)} %`), sorter: (a, b) => (a.share ?? 0) - (b.share ?? 0) },
-    { title: 'Heat to lid', key: 'up', ...right, render: (r) => (r.up === null ? '' : `${(r.up * 100).toFixed(0)} %`) },
+    { title: 'To lid (W)', key: 'up', ...right, render: (r) => num(r.up, 2) },
+    { title: 'To interposer (W)', key: 'down', ...right, render: (r) => num(r.down, 2) },
   ];
 }
