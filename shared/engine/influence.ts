@@ -34,38 +34,118 @@ export function richardson(m: number, n: number): { hm: number; hn: number; fact
   return { hm, hn, factor: r > 1 ? 1 / (r - 1) : 0 };
 }
 
+/** Group identical spectrum rows (sources sharing centre and size along one axis). */
+function axisClasses(f: Float64Array, count: number, modes: number): { classOf: Int32Array; reps: number[] } {
+  const classOf = new Int32Array(count);
+  const reps: number[] = [];
+  const byKey = new Map<string, number[]>();
+  for (let i = 0; i < count; i++) {
+    const base = i * modes;
+    const key = `${f[base + Math.min(1, modes - 1)]}|${f[base + Math.min(2, modes - 1)]}|${f[base + Math.min(5, modes - 1)]}`;
+    const bucket = byKey.get(key) ?? [];
+    let found = -1;
+    for (const c of bucket) {
+      const rb = reps[c] * modes;
+      let same = true;
+      for (let m = 0; m < modes && same; m++) same = f[rb + m] === f[base + m];
+      if (same) {
+        found = c;
+        break;
+      }
+    }
+    if (found < 0) {
+      found = reps.length;
+      reps.push(i);
+      bucket.push(found);
+      byKey.set(key, bucket);
+    }
+    classOf[i] = found;
+  }
+  return { classOf, reps };
+}
+
 /**
- * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]); the half level (Richardson) is summed
- * in the same pass over each row of W.
+ * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]) and, in the same pass, their half-level
+ * sums (Richardson). Sources sharing centre and size along an axis share its spectrum, so the W-weighted
+ * partial sums over the axis with fewer distinct spectra are formed once per pair of distinct spectra
+ * (a row of parts on a grid costs one partial sum, not one per pair); the other axis then costs O(M) a pair.
  */
 function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMode): Float64Array {
   const { fx, fy, m: mm, n: nn } = sp;
   const { hm, hn, factor } = richardson(mm, nn);
-  const count = pairs.length / 2;
   const w = table.w;
   const stride = table.n;
-  const yprod = new Float64Array(nn);
+  const cx = axisClasses(fx, sp.count, mm);
+  const cy = axisClasses(fy, sp.count, nn);
+  const innerY = cy.reps.length <= cx.reps.length;
+  const inner = innerY ? cy : cx;
+  const classes = inner.reps.length;
+  const count = pairs.length / 2;
+  const pairClass = new Int32Array(count);
+  const slot = new Map<number, number>();
+  const classPairs: number[] = [];
+  for (let k = 0; k < count; k++) {
+    const a = inner.classOf[pairs[2 * k]];
+    const b = inner.classOf[pairs[2 * k + 1]];
+    const key = Math.min(a, b) * classes + Math.max(a, b);
+    let s = slot.get(key);
+    if (s === undefined) {
+      s = classPairs.length / 2;
+      slot.set(key, s);
+      classPairs.push(inner.reps[a], inner.reps[b]);
+    }
+    pairClass[k] = s;
+  }
+  const kc = classPairs.length / 2;
+  const outerLen = innerY ? mm : nn;
+  const tFull = new Float64Array(kc * outerLen);
+  const tHalf = new Float64Array(kc * outerLen);
+  if (innerY) {
+    const prod = new Float64Array(nn);
+    for (let k = 0; k < kc; k++) {
+      const yi = classPairs[2 * k] * nn;
+      const yj = classPairs[2 * k + 1] * nn;
+      for (let q = 0; q < nn; q++) prod[q] = fy[yi + q] * fy[yj + q];
+      for (let p = 0; p < mm; p++) {
+        const row = p * stride;
+        let acc = 0;
+        let q = 0;
+        for (; q < hn; q++) acc += w[row + q] * prod[q];
+        tHalf[k * mm + p] = acc;
+        for (; q < nn; q++) acc += w[row + q] * prod[q];
+        tFull[k * mm + p] = acc;
+      }
+    }
+  } else {
+    const prod = new Float64Array(mm);
+    for (let k = 0; k < kc; k++) {
+      const xi = classPairs[2 * k] * mm;
+      const xj = classPairs[2 * k + 1] * mm;
+      for (let p = 0; p < mm; p++) prod[p] = fx[xi + p] * fx[xj + p];
+      const base = k * nn;
+      for (let p = 0; p < mm; p++) {
+        if (p === hm) for (let q = 0; q < hn; q++) tHalf[base + q] = tFull[base + q];
+        const c = prod[p];
+        if (c === 0) continue;
+        const row = p * stride;
+        for (let q = 0; q < nn; q++) tFull[base + q] += c * w[row + q];
+      }
+      if (hm >= mm) for (let q = 0; q < hn; q++) tHalf[base + q] = tFull[base + q];
+    }
+  }
+  const outer = innerY ? fx : fy;
+  const halfLen = innerY ? hm : hn;
   const out = new Float64Array(count);
   for (let k = 0; k < count; k++) {
-    const xi = pairs[2 * k] * mm;
-    const xj = pairs[2 * k + 1] * mm;
-    const yi = pairs[2 * k] * nn;
-    const yj = pairs[2 * k + 1] * nn;
-    for (let q = 0; q < nn; q++) yprod[q] = fy[yi + q] * fy[yj + q];
+    const oi = pairs[2 * k] * outerLen;
+    const oj = pairs[2 * k + 1] * outerLen;
+    const t = pairClass[k] * outerLen;
     let full = 0;
     let half = 0;
-    for (let p = 0; p < mm; p++) {
-      const xp = fx[xi + p] * fx[xj + p];
-      if (xp === 0) continue;
-      const row = p * stride;
-      let inner = 0;
-      let q = 0;
-      if (p < hm) {
-        for (; q < hn; q++) inner += w[row + q] * yprod[q];
-        half += xp * inner;
-      }
-      for (; q < nn; q++) inner += w[row + q] * yprod[q];
-      full += xp * inner;
+    for (let p = 0; p < outerLen; p++) {
+      const o = outer[oi + p] * outer[oj + p];
+      if (p < halfLen) half += o * tHalf[t + p];
+      full += o * tFull[t + p];
     }
     out[k] = mode === 'raw' ? full : full + (full - half) * factor;
   }
