@@ -29,10 +29,33 @@ export interface CompactModel {
   powers: number[];
   temperatures: number[];
   foster?: FosterNetwork;
+  /** Remarks for the netlist header (e.g. the Foster fit error). */
+  notes?: string[];
+}
+
+/**
+ * Make a Foster network's sums equal the steady matrix R exactly (its DC then reproduces the steady
+ * result): self terms are scaled, transfer terms take the difference in their slowest term — as the fit
+ * itself does (fosterFit.ts). Returns the network and the largest relative change of a sum.
+ */
+export function anchorFoster(foster: FosterNetwork, R: number[][]): { network: FosterNetwork; change: number } {
+  let change = 0;
+  const out = foster.R.map((row, j) =>
+    row.map((terms, i) => {
+      const sum = terms.reduce((a, r) => a + r, 0);
+      const target = R[j][i];
+      if (Math.abs(target) > 0) change = Math.max(change, Math.abs(sum - target) / Math.abs(target));
+      if (i === j && sum > 0) return terms.map((r) => (r * target) / sum);
+      const next = terms.slice();
+      next[next.length - 1] += target - sum;
+      return next;
+    }),
+  );
+  return { network: { ...foster, R: out }, change };
 }
 
 /** Build the compact model from one scenario's assembly result (offsets = T − R·P). */
-export function compactModel(result: AssemblyResult, foster?: FosterNetwork): CompactModel {
+export function compactModel(result: AssemblyResult, foster?: FosterNetwork, notes: string[] = []): CompactModel {
   const parts = new Map(result.parts.map((p) => [p.id, p]));
   const nodes = result.tierInfluence.nodes.map((n) => {
     const p = parts.get(n.partId)!;
@@ -48,8 +71,11 @@ export function compactModel(result: AssemblyResult, foster?: FosterNetwork): Co
   });
   const R = result.tierInfluence.matrix.map((row) => row.slice());
   const offsets = temperatures.map((t, i) => t - R[i].reduce((s, r, j) => s + r * powers[j], 0));
-  if (foster && foster.R.length !== nodes.length) {
-    throw new EngineInputError('foster', `The Foster network has ${foster.R.length} nodes; the compact model has ${nodes.length}.`);
+  if (foster && (foster.R.length !== nodes.length || foster.R.some((row) => row.length !== nodes.length))) {
+    throw new EngineInputError('foster', `The Foster network must be square over the ${nodes.length} nodes (one source per node).`);
   }
-  return { scenario: result.scenario, nodes, R, offsets, powers, temperatures, foster };
+  if (!foster) return { scenario: result.scenario, nodes, R, offsets, powers, temperatures, notes };
+  const anchored = anchorFoster(foster, R);
+  const note = `Foster sums set to the steady matrix (largest change ${(100 * anchored.change).toPrecision(2)} %), so DC equals the steady result.`;
+  return { scenario: result.scenario, nodes, R, offsets, powers, temperatures, foster: anchored.network, notes: [...notes, note] };
 }

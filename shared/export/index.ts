@@ -8,7 +8,7 @@ export { readFloorplanCsv, idFromName, FLOORPLAN_HEADER, FLOORPLAN_MAX_PARTS, ty
 export { floorplanToModel, FLOORPLAN_SCENARIO_NAME } from './floorplanModel';
 export { FLOORPLAN_DEFAULTS } from './floorplanDefaults';
 export { readPowerMapCsv, powerMapToCsv, POWER_MAP_MAX_SIDE, POWER_MAP_NOTE, type PowerMapRead } from './powerMapCsv';
-export { compactModel, type CompactModel, type CompactNode } from './compactModel';
+export { compactModel, anchorFoster, type CompactModel, type CompactNode } from './compactModel';
 export { writeNetlist, type NetlistOptions } from './netlist';
 export { spiceStems, asciiText, commentBlock, spiceNumber } from './spiceNames';
-export { UPLOAD_LIMIT_BYTES, matrixQuerySchema, scenarioQuerySchema, modelImportSchema, floorplanImportSchema, csvPreviewSchema, type FloorplanPreview, type PowerMapPreview } from './requests';
+export { UPLOAD_LIMIT_BYTES, matrixQuerySchema, netlistQuerySchema, scenarioQuerySchema, modelImportSchema, floorplanImportSchema, csvPreviewSchema, type FloorplanPreview, type PowerMapPreview } from './requests';

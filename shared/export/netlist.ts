@@ -28,6 +28,7 @@ function header(m: CompactModel, o: NetlistOptions, stems: string[]): string[] {
       : '* MODEL: steady influence matrix (no transient fit exists for this variant): DC / operating point only.',
     '* USE: node t_<name> is the temperature of a part junction or DRAM tier; IP_<name> is its power - change the value',
     '*   (or use a PWL source) for other loads. Any current injected into t_<name> counts as power of that node.',
+    ...(m.notes ?? []).flatMap((note) => commentBlock(`NOTE: ${note}`, 96)),
     '* CAUTION:',
     ...commentBlock(EXPORT_CAUTION, 96, '*   '),
     '*',
@@ -40,10 +41,20 @@ function header(m: CompactModel, o: NetlistOptions, stems: string[]): string[] {
   return lines;
 }
 
+/**
+ * Self stages below this fraction of their sum are merged into the others (rescaled so the sum, hence
+ * DC, is unchanged): a tiny stage changes the response by < 1e-6 but makes the circuit ill-conditioned.
+ */
+export const NEGLIGIBLE_STAGE = 1e-6;
+
 function selfTerm(m: CompactModel, i: number, s: string, from: string, to: string): string[] {
   const f = m.foster;
   if (!f) return [`RS_${s} ${from} ${to} ${num(m.R[i][i])}`];
-  const stages = f.R[i][i].map((r, k) => ({ r, k })).filter((t) => t.r > 0);
+  const positive = f.R[i][i].map((r, k) => ({ r, k })).filter((t) => t.r > 0);
+  const total = positive.reduce((a, t) => a + t.r, 0);
+  const kept = positive.filter((t) => t.r > NEGLIGIBLE_STAGE * total);
+  const keptSum = kept.reduce((a, t) => a + t.r, 0);
+  const stages = kept.map((t) => ({ k: t.k, r: (t.r * total) / keptSum }));
   if (!stages.length) return [`RS_${s} ${from} ${to} 0`];
   return stages.flatMap(({ r, k }, q) => {
     const a = q === 0 ? from : `f_${s}_${q}`;

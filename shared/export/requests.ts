@@ -17,6 +17,9 @@ export const matrixQuerySchema = z.object({
 /** Query of the temperatures CSV and netlist exports: one scenario (all scenarios for the CSV when absent). */
 export const scenarioQuerySchema = z.object({ scenario: z.string().max(40).optional() });
 
+/** Query of the netlist export: the scenario its sources hold, and Foster (auto: when the transient exists) or steady. */
+export const netlistQuerySchema = z.object({ scenario: z.string().max(40).optional(), model: z.enum(['auto', 'steady', 'foster']).default('auto') });
+
 /** POST /api/assemblies/:aid/import as JSON: the model file as an object (or its text), and the new variant's name. */
 export const modelImportSchema = z.object({
   name: nameSchema.optional(),
