@@ -4,9 +4,18 @@ import { modelSchema, type Model, type Part } from '../../shared/schemas/model';
 
 const MM = 1e-3;
 
-/** The LX-9 demo for 8 parts; otherwise a cols × rows grid of 6 × 5 mm parts, every third a memory stack. */
-export function benchModel(parts: number): Model {
-  if (parts === 8) return lx9Model('A');
+/** A deterministic shift in (−0.4, 0.4) mm, different for every part and axis. */
+function shift(k: number, axis: number): number {
+  const v = Math.sin(12.9898 * (k + 1) + 78.233 * axis) * 43758.5453;
+  return 0.8 * (v - Math.floor(v) - 0.5);
+}
+
+/**
+ * The LX-9 demo for 8 parts; otherwise a cols × rows grid of 6 × 5 mm parts, every third a memory stack.
+ * `jitter` shifts every part by up to ±0.4 mm (deterministically) so that no two share a row or column.
+ */
+export function benchModel(parts: number, jitter = false): Model {
+  if (parts === 8 && !jitter) return lx9Model('A');
   const cols = Math.ceil(Math.sqrt(parts * 1.2));
   const rows = Math.ceil(parts / cols);
   const w = 6;
@@ -30,8 +39,8 @@ export function benchModel(parts: number): Model {
       id,
       name: id,
       kind: memory ? 'memory' : 'compute',
-      x: (gap + (k % cols) * (w + gap) + w / 2) * MM,
-      y: (gap + Math.floor(k / cols) * (h + gap) + h / 2) * MM,
+      x: (gap + (k % cols) * (w + gap) + w / 2 + (jitter ? shift(k, 1) : 0)) * MM,
+      y: (gap + Math.floor(k / cols) * (h + gap) + h / 2 + (jitter ? shift(k, 2) : 0)) * MM,
       width: w * MM,
       height: h * MM,
       rotation: 0,

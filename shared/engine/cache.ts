@@ -26,7 +26,7 @@ export class ImpedanceCache {
   /** maxEntries: tables kept; maxValues: total table size kept (Float64 values; 8 bytes each). */
   constructor(
     readonly maxEntries = 12,
-    readonly maxValues = 12_000_000,
+    readonly maxValues = 4_000_000,
   ) {}
 
   /** A table covering at least m × n modes for this channel and s (computed when missing). */

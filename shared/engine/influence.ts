@@ -34,6 +34,9 @@ export function richardson(m: number, n: number): { hm: number; hn: number; fact
   return { hm, hn, factor: r > 1 ? 1 / (r - 1) : 0 };
 }
 
+/** Class pairs summed together per pass over a row of W. */
+const BLOCK = 8;
+
 /** Group identical spectrum rows (sources sharing centre and size along one axis). */
 function axisClasses(f: Float64Array, count: number, modes: number): { classOf: Int32Array; reps: number[] } {
   const classOf = new Int32Array(count);
@@ -101,19 +104,26 @@ function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMo
   const tFull = new Float64Array(kc * outerLen);
   const tHalf = new Float64Array(kc * outerLen);
   if (innerY) {
-    const prod = new Float64Array(nn);
-    for (let k = 0; k < kc; k++) {
-      const yi = classPairs[2 * k] * nn;
-      const yj = classPairs[2 * k + 1] * nn;
-      for (let q = 0; q < nn; q++) prod[q] = fy[yi + q] * fy[yj + q];
+    // Class pairs in blocks of BLOCK: each row of W is read once per block while it sits in cache.
+    const prod = new Float64Array(BLOCK * nn);
+    for (let k0 = 0; k0 < kc; k0 += BLOCK) {
+      const kb = Math.min(BLOCK, kc - k0);
+      for (let b = 0; b < kb; b++) {
+        const yi = classPairs[2 * (k0 + b)] * nn;
+        const yj = classPairs[2 * (k0 + b) + 1] * nn;
+        for (let q = 0; q < nn; q++) prod[b * nn + q] = fy[yi + q] * fy[yj + q];
+      }
       for (let p = 0; p < mm; p++) {
         const row = p * stride;
-        let acc = 0;
-        let q = 0;
-        for (; q < hn; q++) acc += w[row + q] * prod[q];
-        tHalf[k * mm + p] = acc;
-        for (; q < nn; q++) acc += w[row + q] * prod[q];
-        tFull[k * mm + p] = acc;
+        for (let b = 0; b < kb; b++) {
+          const pb = b * nn;
+          let acc = 0;
+          let q = 0;
+          for (; q < hn; q++) acc += w[row + q] * prod[pb + q];
+          tHalf[(k0 + b) * mm + p] = acc;
+          for (; q < nn; q++) acc += w[row + q] * prod[pb + q];
+          tFull[(k0 + b) * mm + p] = acc;
+        }
       }
     }
   } else {
