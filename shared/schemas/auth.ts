@@ -38,3 +38,14 @@ export const meSchema = z.object({
   csrfToken: z.string().optional(),
 });
 export type Me = z.infer<typeof meSchema>;
+
+/** PATCH /api/auth/me body: the signed-in user's display name. */
+export const profileSchema = z.object({ name: nameSchema });
+export type ProfileInput = z.infer<typeof profileSchema>;
+
+/** POST /api/auth/password body: the current password and the new one. */
+export const passwordChangeSchema = z.object({
+  currentPassword: z.string().min(1, 'required').max(200),
+  newPassword: passwordSchema,
+});
+export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;

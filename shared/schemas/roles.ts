@@ -9,6 +9,7 @@ export type Role = z.infer<typeof roleSchema>;
 /** Every action a route may require. */
 export const capabilities = [
   'workspace.read', // see the workspace, its projects, variants, library, comments, activity
+  'workspace.manage', // rename the workspace
   'members.manage', // change roles, remove members
   'invitations.manage', // invite, list and revoke invitations
   'outbox.read', // read the local mail outbox

@@ -58,3 +58,13 @@ export async function listMemberships(userId: number): Promise<MembershipSummary
 export function inTransaction<T>(fn: (t: Transaction) => Promise<T>): Promise<T> {
   return UserModel.sequelize!.transaction(fn);
 }
+
+/** A user's password hash by id. */
+export async function findPasswordHash(id: number): Promise<string | null> {
+  return (await UserModel.findByPk(id))?.passwordHash ?? null;
+}
+
+/** Change a user's name and/or password hash. */
+export async function updateUser(id: number, fields: { name?: string; passwordHash?: string }): Promise<void> {
+  await UserModel.update(fields, { where: { id } });
+}

@@ -1,12 +1,13 @@
-/** /api/auth: CSRF token, who am I, first-owner setup, sign-in, sign-out. */
+/** /api/auth: CSRF token, who am I (and own name/password), first-owner setup, sign-in, sign-out. */
 import { Router } from 'express';
-import { loginSchema, setupSchema } from '@shared/schemas/auth';
+import { loginSchema, passwordChangeSchema, profileSchema, setupSchema } from '@shared/schemas/auth';
 import type { AppContext } from '../../lib/context';
 import { validate } from '../../lib/validate';
 import { requireUserId } from '../../lib/permissions';
 import { UnauthorizedError } from '../../lib/errors';
 import { credentialLimiter } from '../../lib/rateLimits';
 import * as service from './authService';
+import * as account from './accountService';
 import { endSession, startSession } from './signIn';
 
 /** Build the auth router. */
@@ -25,6 +26,18 @@ export function authRouter(ctx: AppContext): Router {
       throw new UnauthorizedError();
     }
     res.json(view);
+  });
+
+  r.patch('/me', async (req, res) => {
+    const userId = requireUserId(req);
+    await account.rename(userId, validate(profileSchema, req.body).name);
+    res.json(await service.me(userId));
+  });
+
+  r.post('/password', limiter, async (req, res) => {
+    const userId = requireUserId(req);
+    await account.changePassword(userId, validate(passwordChangeSchema, req.body), ctx.config.argon2);
+    res.json(await startSession(req, userId, ctx.generateCsrfToken));
   });
 
   r.get('/setup', async (_req, res) => {

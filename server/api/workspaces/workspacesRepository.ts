@@ -16,6 +16,20 @@ export async function listForUser(userId: number): Promise<Workspace[]> {
   return rows.map((m) => ({ id: m.workspace.id, name: m.workspace.name, role: m.role, createdAt: m.workspace.createdAt.toISOString() }));
 }
 
+/** Create a workspace owned by `userId`. */
+export async function createWorkspace(name: string, userId: number): Promise<Workspace> {
+  return WorkspaceModel.sequelize!.transaction(async (transaction) => {
+    const w = await WorkspaceModel.create({ name }, { transaction });
+    await MembershipModel.create({ userId, workspaceId: w.id, role: 'owner' }, { transaction });
+    return { id: w.id, name: w.name, role: 'owner' as const, createdAt: w.createdAt.toISOString() };
+  });
+}
+
+/** Rename a workspace. */
+export async function renameWorkspace(workspaceId: number, name: string): Promise<void> {
+  await WorkspaceModel.update({ name }, { where: { id: workspaceId } });
+}
+
 /** One workspace seen with `role`. */
 export async function findWorkspace(workspaceId: number, role: Role): Promise<Workspace | null> {
   const w = await WorkspaceModel.findByPk(workspaceId);

@@ -1,6 +1,6 @@
-/** /api/workspaces: my workspaces, one workspace, its members (roles, removal by owners). */
+/** /api/workspaces: my workspaces, create/rename, its members (roles, removal by owners). */
 import { Router } from 'express';
-import { memberRoleSchema } from '@shared/schemas/workspaces';
+import { memberRoleSchema, workspaceNameSchema } from '@shared/schemas/workspaces';
 import { authorize, parseId, requireUserId } from '../../lib/permissions';
 import { validate } from '../../lib/validate';
 import { ConflictError, NotFoundError } from '../../lib/errors';
@@ -16,8 +16,21 @@ export function workspacesRouter(): Router {
     res.json(await repo.listForUser(requireUserId(req)));
   });
 
+  r.post('/workspaces', async (req, res) => {
+    const userId = requireUserId(req);
+    const { name } = validate(workspaceNameSchema, req.body);
+    res.status(201).json(await repo.createWorkspace(name, userId));
+  });
+
   r.get('/workspaces/:wid', async (req, res) => {
     const a = await authorize(req, 'workspace', req.params.wid, 'workspace.read');
+    res.json(await repo.findWorkspace(a.workspaceId, a.role));
+  });
+
+  r.patch('/workspaces/:wid', async (req, res) => {
+    const a = await authorize(req, 'workspace', req.params.wid, 'workspace.manage');
+    const { name } = validate(workspaceNameSchema, req.body);
+    await repo.renameWorkspace(a.workspaceId, name);
     res.json(await repo.findWorkspace(a.workspaceId, a.role));
   });
 

@@ -90,4 +90,22 @@ describe('auth', () => {
     const res = await c.post('/api/auth/setup', { email: 'x@larkspur.example', name: 'X', password: 'long-enough-password', workspaceName: 'W' });
     expect(res.status).toBe(409);
   });
+
+  it('lets a user rename themselves and change their password (current one required)', async () => {
+    const c = new Client(t.app);
+    await c.login(demoUsers.owner.email, demoUsers.owner.password);
+    const renamed = await c.patch('/api/auth/me', { name: 'Ada Q.' });
+    expect(renamed.status).toBe(200);
+    expect(renamed.body.user.name).toBe('Ada Q.');
+    expect((await c.post('/api/auth/password', { currentPassword: 'wrong-one', newPassword: 'a-brand-new-password' })).status).toBe(401);
+    const same = await c.post('/api/auth/password', { currentPassword: demoUsers.owner.password, newPassword: demoUsers.owner.password });
+    expect(same.status).toBe(400);
+    const changed = await c.post('/api/auth/password', { currentPassword: demoUsers.owner.password, newPassword: 'a-brand-new-password' });
+    expect(changed.status).toBe(200);
+    c.token = changed.body.csrfToken;
+    expect((await new Client(t.app).login(demoUsers.owner.email, demoUsers.owner.password)).status).toBe(401);
+    expect((await new Client(t.app).login(demoUsers.owner.email, 'a-brand-new-password')).status).toBe(200);
+    await c.post('/api/auth/password', { currentPassword: 'a-brand-new-password', newPassword: demoUsers.owner.password });
+    await c.patch('/api/auth/me', { name: demoUsers.owner.name });
+  });
 });

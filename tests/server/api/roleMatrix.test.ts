@@ -39,7 +39,10 @@ const currentVersion = async (f: Fixture, path: string) => (await f.owner.get(pa
 const cases: Case[] = [
   { method: 'get', route: 'GET /auth/me', path: () => '/api/auth/me', expect: all, outsider: 200 },
   { method: 'get', route: 'GET /workspaces', path: () => '/api/workspaces', expect: all, outsider: 200 },
+  { method: 'patch', route: 'PATCH /auth/me', path: () => '/api/auth/me', body: () => ({ name: 'Same Person' }), expect: all, outsider: 200 },
+  { method: 'post', route: 'POST /workspaces', path: () => '/api/workspaces', body: () => ({ name: 'Side team' }), expect: [201, 201, 201], outsider: 201 },
   { method: 'get', route: 'GET /workspaces/:wid', path: (f) => `/api/workspaces/${f.wid}`, expect: all },
+  { method: 'patch', route: 'PATCH /workspaces/:wid', path: (f) => `/api/workspaces/${f.wid}`, body: () => ({ name: 'Larkspur Compute (demo)' }), expect: ownerOnly },
   { method: 'get', route: 'GET /workspaces/:wid/members', path: (f) => `/api/workspaces/${f.wid}/members`, expect: all },
   { method: 'patch', route: 'PATCH /workspaces/:wid/members/:uid', path: async (f) => `/api/workspaces/${f.wid}/members/${await f.freshMember()}`, body: () => ({ role: 'engineer' }), expect: ownerOnly },
   { method: 'del', route: 'DELETE /workspaces/:wid/members/:uid', path: async (f) => `/api/workspaces/${f.wid}/members/${await f.freshMember()}`, expect: [204, 403, 403] },
