@@ -1,5 +1,5 @@
 /** Small hand-made models for the assembly tests (SI units). */
-import { modelSchema, type Layer, type Model, type ModelInput, type Part } from '@shared/schemas/model';
+import { modelSchema, type Layer, type Model, type ModelInput, type Part, type PartLoad } from '@shared/schemas/model';
 
 /** An isotropic layer with heat capacity. */
 export const layer = (thickness: number, k: number, rho = 2000, cp = 800): Layer => ({ thickness, kxy: k, kz: k, rho, cp });
@@ -35,6 +35,6 @@ export function stack(width: number, height: number, hTop = 5000, hBottom = 50, 
 }
 
 /** A validated model from a stack, parts and one scenario's loads. */
-export function model(s: ModelInput['stack'], parts: Part[], loads: Record<string, { power: number; tiers?: number[] }>): Model {
+export function model(s: ModelInput['stack'], parts: Part[], loads: Record<string, PartLoad>): Model {
   return modelSchema.parse({ stack: s, parts, scenarios: [{ id: 'run', name: 'Run', loads }] });
 }

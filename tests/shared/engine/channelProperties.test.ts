@@ -102,3 +102,20 @@ describe('solveChannelRequest', () => {
     }
   });
 });
+
+describe('solveChannelRequest map', () => {
+  it('returns the requested source-plane map whose hottest cell lies on the hottest source', () => {
+    const r = solveChannelRequest({
+      footprint: { x: 0.02, y: 0.01 },
+      above: { layers: [{ thickness: 1e-3, k: 150 }], h: 5000 },
+      below: { layers: [], h: 0 },
+      sources: [{ x: 0.005, y: 0.005, width: 0.003, height: 0.003, power: 10 }, { x: 0.015, y: 0.005, width: 0.003, height: 0.003, power: 1 }],
+      map: { nx: 32, ny: 16 },
+    });
+    expect(r.map?.values).toHaveLength(32 * 16);
+    const values = r.map!.values;
+    const hottest = values.indexOf(Math.max(...values));
+    expect(((hottest % 32) + 0.5) * r.map!.dx).toBeLessThan(0.01);
+    expect(Math.max(...values)).toBeLessThanOrEqual(r.peakRise[0] * (1 + 1e-9));
+  });
+});
