@@ -1,11 +1,12 @@
 /**
  * Foster fit of one step response (physics.md §3): Z(t) ≈ Σ_k R_k (1 − e^{−t/τ_k}) on a
- * given log-spaced τ grid. Self-impedances: R_k ≥ 0 by NNLS (Lawson & Hanson 1974); transfer
- * impedances: signed, lightly Tikhonov-regularised least squares. Σ R_k = steady R is imposed
+ * given log-spaced τ grid. Self-impedances: R_k ≥ 0 by NNLS (Lawson & Hanson 1974) on rows
+ * weighted for relative accuracy; transfer impedances: signed, lightly Tikhonov-regularised least
+ * squares on unweighted rows (one factorisation serves every transfer entry). Σ R_k = steady R is imposed
  * by a weighted extra row (the weighting method, Lawson & Hanson 1974, ch. 22), then made
  * exact: non-negative terms are rescaled, signed ones absorb the rest in the slowest term.
  */
-import { leastSquares } from './leastSquares';
+import { qrFactor, qrSolve, type QrFactors } from './leastSquares';
 import { nnls } from './nnls';
 
 /** Fit settings (defaults in FOSTER_FIT_DEFAULTS). */
@@ -16,7 +17,7 @@ export interface FosterFitSettings {
   floor: number;
   /** Weight of the Σ R_k = R_steady row relative to a data row. */
   steadyWeight: number;
-  /** Tikhonov parameter of signed fits, relative to the largest row weight. */
+  /** Tikhonov parameter λ of signed fits (rows are 1 − e^{−t/τ}, of order 1). */
   regularisation: number;
 }
 
@@ -48,33 +49,42 @@ export function fosterStep(R: readonly number[], tau: readonly number[], t: numb
   return z;
 }
 
-/** Fit Σ R_k(1 − e^{−t/τ_k}) to samples Z(times) with Σ R_k = steady. */
+/** The factorised design of signed fits on given times and τ grid, shared by many entries. */
+export function signedFosterDesign(times: readonly number[], tau: readonly number[], settings: Partial<FosterFitSettings> = {}): QrFactors {
+  const o = { ...FOSTER_FIT_DEFAULTS, ...settings };
+  const A = times.map((t) => tau.map((tk) => -Math.expm1(-t / tk)));
+  A.push(tau.map(() => o.steadyWeight));
+  return qrFactor(A, o.regularisation);
+}
+
+/** Fit Σ R_k(1 − e^{−t/τ_k}) to samples Z(times) with Σ R_k = steady; `design` reuses a signed factorisation. */
 export function fitFoster(
   times: readonly number[],
   values: readonly number[],
   tau: readonly number[],
   steady: number,
   settings: Partial<FosterFitSettings> = {},
+  design?: QrFactors,
 ): FosterFit {
   const o = { ...FOSTER_FIT_DEFAULTS, ...settings };
   const scale = Math.abs(steady) > 0 ? Math.abs(steady) : Math.max(1e-300, ...values.map(Math.abs));
-  const A: number[][] = [];
-  const b: number[] = [];
-  times.forEach((t, i) => {
-    const w = 1 / Math.max(Math.abs(values[i]), o.floor * scale);
-    A.push(tau.map((tk) => -Math.expm1(-t / tk) * w));
-    b.push(values[i] * w);
-  });
-  const ws = o.steadyWeight / scale;
-  A.push(tau.map(() => ws));
-  b.push(steady * ws);
   let R: number[];
   let converged = true;
   if (o.sign === 'nonnegative') {
+    const A: number[][] = [];
+    const b: number[] = [];
+    times.forEach((t, i) => {
+      const w = 1 / Math.max(Math.abs(values[i]), o.floor * scale);
+      A.push(tau.map((tk) => -Math.expm1(-t / tk) * w));
+      b.push(values[i] * w);
+    });
+    const ws = o.steadyWeight / scale;
+    A.push(tau.map(() => ws));
+    b.push(steady * ws);
     const r = nnls(A, b);
     R = r.x;
     converged = r.converged;
-  } else R = leastSquares(A, b, o.regularisation / (o.floor * scale));
+  } else R = qrSolve(design ?? signedFosterDesign(times, tau, o), [...values, steady * o.steadyWeight]);
   const sum = R.reduce((a, r) => a + r, 0);
   if (o.sign === 'nonnegative' && sum > 0) R = R.map((r) => (r * steady) / sum);
   else if (o.sign === 'signed') R[R.length - 1] += steady - sum;

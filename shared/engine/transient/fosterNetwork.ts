@@ -3,7 +3,7 @@
  * Z_ji(t) ≈ Σ_k R[j][i][k]·(1 − e^{−t/τ_k}). Self terms are fitted non-negative, transfer
  * terms signed; by reciprocity only j ≥ i is fitted and mirrored.
  */
-import { fitFoster, logSpacedTaus, type FosterFitSettings } from './fosterFit';
+import { fitFoster, logSpacedTaus, signedFosterDesign, type FosterFitSettings } from './fosterFit';
 
 /** Sampled step responses: Z[k][j][i] = rise of node j at times[k] per watt stepped on in source i (K/W). */
 export interface ImpedanceSeries {
@@ -72,12 +72,13 @@ export function fitFosterNetwork(series: ImpedanceSeries, settings: Partial<Fost
   const relError = steady.map(() => new Array<number>(cols).fill(0));
   let worst = { node: 0, source: 0, relError: 0 };
   let converged = true;
+  const design = signedFosterDesign(times, tau, o.fit);
   for (let j = 0; j < rows; j++) {
     for (let i = 0; i < (symmetric ? j + 1 : cols); i++) {
       const mirror = symmetric && i !== j;
       const values = times.map((_, k) => (mirror ? 0.5 * (Z[k][j][i] + Z[k][i][j]) : Z[k][j][i]));
       const sign = own(i) === j ? 'nonnegative' : 'signed';
-      const f = fitFoster(times, values, tau, mirror ? 0.5 * (steady[j][i] + steady[i][j]) : steady[j][i], { ...o.fit, sign });
+      const f = fitFoster(times, values, tau, mirror ? 0.5 * (steady[j][i] + steady[i][j]) : steady[j][i], { ...o.fit, sign }, design);
       converged &&= f.converged;
       R[j][i] = f.R;
       maxAbsError[j][i] = f.maxAbsError;

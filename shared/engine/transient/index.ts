@@ -1,9 +1,9 @@
 /** Transient thermal behaviour: Laplace inversion, Foster networks, profiles and timing (physics.md §3). */
 export { stehfestAbscissae, stehfestCombine, stehfestInvert, stehfestWeights, STEHFEST_TERMS } from './stehfest';
 export { talbotInvert, TALBOT_NODES, type Complex } from './talbot';
-export { leastSquares } from './leastSquares';
+export { leastSquares, qrFactor, qrSolve, type QrFactors } from './leastSquares';
 export { nnls, type NnlsResult } from './nnls';
-export { fitFoster, fosterStep, logSpacedTaus, FOSTER_FIT_DEFAULTS, type FosterFit, type FosterFitSettings } from './fosterFit';
+export { fitFoster, fosterStep, logSpacedTaus, signedFosterDesign, FOSTER_FIT_DEFAULTS, type FosterFit, type FosterFitSettings } from './fosterFit';
 export {
   fitFosterNetwork,
   networkStep,
@@ -22,4 +22,8 @@ export { timingAnswers, type TimingAnswers, type TimingRequest } from './timingA
 export { formatCelsius, formatDuration, formatPercent, formatWatts } from './sentences';
 export { checkCancelled, TransientCancelledError, type LongRunHooks } from './progress';
 export { buildPlaneKernel, planeMatrixAt, KERNEL_POINTS_PER_DECADE, type PlaneKernel } from './planeKernel';
-export { assemblyResponseAt, prepareLaplaceAssembly, type LaplaceAssembly } from './laplaceAssembly';
+export { assemblyResponseAt, prepareLaplaceAssembly, LAPLACE_DEFAULTS, type LaplaceAssembly, type LaplaceSettings } from './laplaceAssembly';
+export { assemblyImpedance, impedanceTimes, nodeLabel, validateTimes, IMPEDANCE_DEFAULTS, MAX_IMPEDANCE_TIMES, type AssemblyImpedance, type ImpedanceOptions } from './assemblyImpedance';
+export { assemblySources, type ImpedanceSource } from './impedanceSources';
+export { impedanceChecks, type ImpedanceChecks } from './impedanceChecks';
+export { channelImpedance, requireHeatCapacity, solveChannelTransient, type ChannelImpedance } from './channelImpedance';

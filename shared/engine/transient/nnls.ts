@@ -35,10 +35,13 @@ export function nnls(A: readonly (readonly number[])[], b: readonly number[], ma
   for (const v of b) bScale = Math.max(bScale, Math.abs(v));
   // optimality tolerance on the gradient: a few units of round-off of Aᵀ(b − Ax)
   const tol = 10 * Number.EPSILON * Math.max(A.length, 1) * aScale * bScale;
+  // a column whose own coefficient comes out ≤ 0 right after entering is blocked until x changes
+  // (Lawson & Hanson's guard against round-off cycling)
+  const blocked = new Array<boolean>(n).fill(false);
   for (let it = 1; it <= limit; it++) {
     const w = residualGradient(A, b, x);
     let t = -1;
-    for (let j = 0; j < n; j++) if (!passive[j] && w[j] > tol && (t < 0 || w[j] > w[t])) t = j;
+    for (let j = 0; j < n; j++) if (!passive[j] && !blocked[j] && w[j] > tol && (t < 0 || w[j] > w[t])) t = j;
     if (t < 0) return { x, iterations: it - 1, converged: true };
     passive[t] = true;
     for (let inner = 0; inner <= n; inner++) {
@@ -46,8 +49,14 @@ export function nnls(A: readonly (readonly number[])[], b: readonly number[], ma
       const zP = leastSquares(A.map((row) => cols.map((j) => row[j])), b);
       const z = new Array<number>(n).fill(0);
       cols.forEach((j, q) => (z[j] = zP[q]));
+      if (inner === 0 && !(z[t] > 0)) {
+        passive[t] = false;
+        blocked[t] = true;
+        break;
+      }
       if (cols.every((j) => z[j] > 0)) {
         for (let j = 0; j < n; j++) x[j] = z[j];
+        blocked.fill(false);
         break;
       }
       let alpha = 1;

@@ -34,7 +34,7 @@ function lagrange4(t: number, out: Float64Array): void {
 }
 
 /** Project the modal sum of a channel (its truncation, spectra and Richardson finish) onto a β grid. */
-export function buildPlaneKernel(modes: ChannelModes, perDecade = KERNEL_POINTS_PER_DECADE): PlaneKernel {
+export function buildPlaneKernel(modes: Pick<ChannelModes, 'channel' | 'spectra'>, perDecade = KERNEL_POINTS_PER_DECADE): PlaneKernel {
   const { channel, spectra } = modes;
   const { fx, fy, m, n, count } = spectra;
   const { hm, hn, factor } = richardson(m, n);
