@@ -118,7 +118,13 @@ export function createLiveSolve(source: LiveSolveSource, options: LiveSolveOptio
     solving.value = true;
     inFlightDraft = asDraft;
     const mapSize = asDraft ? (options.draftMapSize ?? 32) : (options.mapSize ?? 128);
-    ensureWorker().postMessage({ job: version.value, model: toRaw(model), scenarioId: source.scenarioId.value ?? '', mapSize });
+    try {
+      ensureWorker().postMessage({ job: version.value, model: toRaw(model), scenarioId: source.scenarioId.value ?? '', mapSize });
+    } catch (e) {
+      solving.value = false;
+      failedVersion = version.value;
+      error.value = `Could not start the solver: ${(e as Error).message}`;
+    }
   }
 
   /** Start a job for the newest model unless one is running (its reply calls us again); refine a draft after a pause. */
