@@ -1,6 +1,6 @@
 /** Messages between the live-solve composable and the solve worker (structured-clone safe). */
 import type { Model } from '@shared/schemas/model';
-import type { AssemblyResult } from '@shared/engine/assembly/result';
+import type { AssemblyResult } from '@shared/engine';
 
 /** Ask the worker to solve one scenario of a model; `job` comes back with the answer. */
 export interface SolveRequest {

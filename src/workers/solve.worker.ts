@@ -1,7 +1,5 @@
 /** Web Worker: runs the thermal engine off the main thread; keeps its own modal-table cache between drags. */
-import { solveAssembly } from '@shared/engine/assembly/solve';
-import { ImpedanceCache } from '@shared/engine/cache';
-import { EngineInputError } from '@shared/engine/errors';
+import { EngineInputError, ImpedanceCache, solveAssembly } from '@shared/engine';
 import type { SolveReply, SolveRequest } from './protocol';
 
 interface WorkerScope {
