@@ -12,10 +12,12 @@ import { commentsRouter } from './comments/commentsRouter';
 import { activityRouter } from './activity/activityRouter';
 import { libraryRouter } from './library/libraryRouter';
 import { solveRouter } from './solve/solveRouter';
+import { healthRouter } from './health';
 
 /** All API routes (mounted at /api by app.ts). */
 export function apiRoutes(ctx: AppContext): Router {
   const r = Router();
+  r.use(healthRouter());
   r.use('/auth', authRouter(ctx));
   r.use(workspacesRouter());
   r.use(invitationsRouter(ctx));

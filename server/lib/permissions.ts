@@ -6,7 +6,7 @@ import * as access from '../api/access/accessRepository';
 import { ForbiddenError, NotFoundError, UnauthorizedError } from './errors';
 
 /** What kind of record a route acts on. */
-export type Target = 'workspace' | 'project' | 'assembly' | 'variant' | 'material' | 'partTemplate';
+export type Target = 'workspace' | 'project' | 'assembly' | 'variant' | 'comment' | 'material' | 'partTemplate';
 
 /** A granted access: who, where, with which role. */
 export interface Access extends access.Location {
@@ -19,12 +19,13 @@ const locators: Record<Target, (id: number) => Promise<access.Location | null>> 
   project: access.locateProject,
   assembly: access.locateAssembly,
   variant: access.locateVariant,
+  comment: access.locateComment,
   material: access.locateMaterial,
   partTemplate: access.locatePartTemplate,
 };
 
 const labels: Record<Target, string> = {
-  workspace: 'Workspace', project: 'Project', assembly: 'Assembly', variant: 'Variant', material: 'Material', partTemplate: 'Part template',
+  workspace: 'Workspace', project: 'Project', assembly: 'Assembly', variant: 'Variant', comment: 'Comment', material: 'Material', partTemplate: 'Part template',
 };
 
 /** The signed-in user's id, or a 401. */

@@ -49,6 +49,16 @@ export function locateVariant(variantId: number): Promise<Location | null> {
   );
 }
 
+/** Locate a comment (recordId = comment id, variantId its variant). */
+export function locateComment(commentId: number): Promise<Location | null> {
+  return one(
+    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId, c.id AS recordId
+     FROM comments c JOIN variants v ON v.id = c.variant_id JOIN assemblies a ON a.id = v.assembly_id
+     JOIN projects p ON p.id = a.project_id WHERE c.id = ?`,
+    commentId,
+  );
+}
+
 /** Locate a library material. */
 export function locateMaterial(materialId: number): Promise<Location | null> {
   return one('SELECT workspace_id AS workspaceId, id AS recordId FROM materials WHERE id = ?', materialId);

@@ -29,3 +29,13 @@ export async function addComment(projectId: number, variantId: number, userId: n
   const c = await CommentModel.findByPk(id, { include: [{ model: UserModel, as: 'author', attributes: ['id', 'name'] }] });
   return toComment(c!);
 }
+
+/** The author of a comment (null when the account is gone). */
+export async function commentAuthor(id: number): Promise<number | null> {
+  return (await CommentModel.findByPk(id))?.authorId ?? null;
+}
+
+/** Delete a comment. */
+export async function deleteComment(id: number): Promise<void> {
+  await CommentModel.destroy({ where: { id } });
+}

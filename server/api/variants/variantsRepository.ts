@@ -82,6 +82,14 @@ export async function listVersions(variantId: number): Promise<VariantVersion[]>
   return rows.map(toVersion);
 }
 
+/** History entry `n` with its model, or null. */
+export async function findVersion(variantId: number, n: number): Promise<(VariantVersion & { model: Model }) | null> {
+  const h = await VariantVersionModel.findOne({
+    where: { variantId, version: n }, include: [{ model: UserModel, as: 'savedBy', attributes: ['id', 'name'] }],
+  });
+  return h ? { ...toVersion(h), model: JSON.parse(h.model) as Model } : null;
+}
+
 /** The model saved as version `n`, or null. */
 export async function versionModel(variantId: number, n: number, t?: Transaction): Promise<Model | null> {
   const h = await VariantVersionModel.findOne({ where: { variantId, version: n }, transaction: t });

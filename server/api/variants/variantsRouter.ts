@@ -6,6 +6,7 @@ import {
 import type { AppContext } from '../../lib/context';
 import { authorize, parseId } from '../../lib/permissions';
 import { validate } from '../../lib/validate';
+import { NotFoundError } from '../../lib/errors';
 import * as repo from './variantsRepository';
 import * as service from './variantsService';
 import { changeStatus } from './reviewService';
@@ -48,6 +49,13 @@ export function variantsRouter(ctx: AppContext): Router {
   r.get('/variants/:vid/versions', async (req, res) => {
     const a = await authorize(req, 'variant', req.params.vid, 'workspace.read');
     res.json(await repo.listVersions(a.variantId!));
+  });
+
+  r.get('/variants/:vid/versions/:n', async (req, res) => {
+    const a = await authorize(req, 'variant', req.params.vid, 'workspace.read');
+    const found = await repo.findVersion(a.variantId!, parseId(req.params.n, 'Version'));
+    if (!found) throw new NotFoundError('Version');
+    res.json(found);
   });
 
   r.post('/variants/:vid/versions/:n/restore', async (req, res) => {

@@ -19,6 +19,7 @@ interface Case {
   /** Expected status for owner, engineer, reviewer; outsider → 404 and anon → 401 unless given. */
   expect: [number, number, number];
   outsider?: number;
+  anon?: number;
 }
 
 const all: [number, number, number] = [200, 200, 200];
@@ -37,6 +38,7 @@ const channelBody = {
 const currentVersion = async (f: Fixture, path: string) => (await f.owner.get(path)).body;
 
 const cases: Case[] = [
+  { method: 'get', route: 'GET /health', path: () => '/api/health', expect: all, outsider: 200, anon: 200 },
   { method: 'get', route: 'GET /auth/me', path: () => '/api/auth/me', expect: all, outsider: 200 },
   { method: 'get', route: 'GET /workspaces', path: () => '/api/workspaces', expect: all, outsider: 200 },
   { method: 'patch', route: 'PATCH /auth/me', path: () => '/api/auth/me', body: () => ({ name: 'Same Person' }), expect: all, outsider: 200 },
@@ -71,12 +73,18 @@ const cases: Case[] = [
   { method: 'post', route: 'POST /variants/:vid/copy', path: (f) => `/api/variants/${f.vid}/copy`, body: () => ({ name: 'Branch' }), expect: created },
   { method: 'del', route: 'DELETE /variants/:vid', path: async (f) => `/api/variants/${await f.freshVariant()}`, expect: gone },
   { method: 'get', route: 'GET /variants/:vid/versions', path: (f) => `/api/variants/${f.vid}/versions`, expect: all },
+  { method: 'get', route: 'GET /variants/:vid/versions/:n', path: (f) => `/api/variants/${f.vid}/versions/1`, expect: all },
   { method: 'post', route: 'POST /variants/:vid/versions/:n/restore', path: async (f) => `/api/variants/${await f.freshVariant()}/versions/1/restore`, expect: design },
   { method: 'patch', route: 'PATCH /variants/:vid/status (request review)', path: async (f) => `/api/variants/${await f.freshVariant()}/status`, body: () => ({ status: 'in_review' }), expect: design },
   { method: 'patch', route: 'PATCH /variants/:vid/status (approve)', path: async (f) => `/api/variants/${await f.freshVariant('in_review')}/status`, body: () => ({ status: 'approved' }), expect: [200, 403, 200] },
   { method: 'patch', route: 'PATCH /variants/:vid/status (request changes)', path: async (f) => `/api/variants/${await f.freshVariant('in_review')}/status`, body: () => ({ status: 'changes_requested' }), expect: [200, 403, 200] },
   { method: 'get', route: 'GET /variants/:vid/comments', path: (f) => `/api/variants/${f.vid}/comments`, expect: all },
   { method: 'post', route: 'POST /variants/:vid/comments', path: (f) => `/api/variants/${f.vid}/comments`, body: () => ({ text: 'Looks warm near the I/O die.', partId: 'cpu0' }), expect: [201, 201, 201] },
+  {
+    method: 'del', route: 'DELETE /comments/:id (owner\'s comment)',
+    path: async (f) => `/api/comments/${(await f.owner.post(`/api/variants/${f.vid}/comments`, { text: 'temporary' })).body.id}`,
+    expect: [204, 403, 403],
+  },
   { method: 'get', route: 'GET /workspaces/:wid/materials', path: (f) => `/api/workspaces/${f.wid}/materials`, expect: all },
   { method: 'post', route: 'POST /workspaces/:wid/materials', path: (f) => `/api/workspaces/${f.wid}/materials`, body: () => ({ name: 'Mold compound', kxy: 0.9, kz: 0.9, rho: 1900, cp: 900 }), expect: created },
   { method: 'patch', route: 'PATCH /materials/:id', path: async (f) => `/api/materials/${await f.freshMaterial()}`, body: () => ({ source: 'common practice' }), expect: design },
@@ -116,7 +124,7 @@ const whos: Who[] = ['owner', 'engineer', 'reviewer', 'outsider', 'anon'];
 
 describe.each(cases)('$route', (c) => {
   it.each(whos)('as %s', async (who) => {
-    const expected = who === 'anon' ? 401 : who === 'outsider' ? (c.outsider ?? 404) : c.expect[whos.indexOf(who)];
+    const expected = who === 'anon' ? (c.anon ?? 401) : who === 'outsider' ? (c.outsider ?? 404) : c.expect[whos.indexOf(who)];
     const path = await c.path(f);
     const body = c.body ? await c.body(f, path) : undefined;
     const client = clients[who];

@@ -64,6 +64,18 @@ describe('variants', () => {
     expect((await engineer.post(`/api/variants/${id}/versions/99/restore`)).status).toBe(404);
   });
 
+  it('shows one old version with its model', async () => {
+    const id = await f.freshVariant();
+    const v = (await engineer.get(`/api/variants/${id}`)).body;
+    const changed = structuredClone(v.model);
+    changed.parts[0].x += 0.0005;
+    await engineer.put(`/api/variants/${id}`, { model: changed, version: 1 });
+    const old = await reviewer.get(`/api/variants/${id}/versions/1`);
+    expect(old.status).toBe(200);
+    expect(old.body.model).toEqual(v.model);
+    expect((await reviewer.get(`/api/variants/${id}/versions/7`)).status).toBe(404);
+  });
+
   it('copies a variant into a new draft at version 1', async () => {
     const copy = await engineer.post(`/api/variants/${f.vid}/copy`, { name: 'A2 — branch', note: 'try a wider gap' });
     expect(copy.status).toBe(201);
@@ -106,6 +118,9 @@ describe('variants', () => {
     expect(kinds).toEqual(['comment.created', 'variant.status', 'variant.saved', 'variant.copied']);
     const comments = (await engineer.get(`/api/variants/${id}/comments`)).body;
     expect(comments[0]).toMatchObject({ partId: 'cpu0', userName: 'Rosa Thistlewood' });
+    expect((await engineer.del(`/api/comments/${comments[0].id}`)).status).toBe(403);
+    expect((await reviewer.del(`/api/comments/${comments[0].id}`)).status).toBe(204);
+    expect((await engineer.get(`/api/variants/${id}/comments`)).body).toEqual([]);
   });
 
   it('creates a variant from the assembly\'s first variant when no model is given', async () => {
