@@ -13,6 +13,7 @@ import { activityRouter } from './activity/activityRouter';
 import { libraryRouter } from './library/libraryRouter';
 import { solveRouter } from './solve/solveRouter';
 import { healthRouter } from './health';
+import { ioRouter } from './io/ioRouter';
 
 /** All API routes (mounted at /api by app.ts). */
 export function apiRoutes(ctx: AppContext): Router {
@@ -29,5 +30,6 @@ export function apiRoutes(ctx: AppContext): Router {
   r.use(activityRouter());
   r.use(libraryRouter());
   r.use(solveRouter());
+  r.use(ioRouter());
   return r;
 }
