@@ -93,6 +93,11 @@ const cases: Case[] = [
   { method: 'post', route: 'POST /workspaces/:wid/part-templates', path: (f) => `/api/workspaces/${f.wid}/part-templates`, body: () => ({ name: 'Chiplet 10 mm', part: templatePart }), expect: created },
   { method: 'patch', route: 'PATCH /part-templates/:id', path: async (f) => `/api/part-templates/${await f.freshPartTemplate()}`, body: () => ({ note: 'checked' }), expect: design },
   { method: 'del', route: 'DELETE /part-templates/:id', path: async (f) => `/api/part-templates/${await f.freshPartTemplate()}`, expect: gone },
+  { method: 'get', route: 'GET /variants/:vid/export.json', path: (f) => `/api/variants/${f.vid}/export.json`, expect: all },
+  {
+    method: 'post', route: 'POST /assemblies/:aid/import', path: (f) => `/api/assemblies/${f.aid}/import`,
+    body: async (f) => ({ name: 'Imported', model: (await f.owner.get(`/api/variants/${f.vid}`)).body.model }), expect: created,
+  },
   { method: 'post', route: 'POST /solve/channel', path: () => '/api/solve/channel', body: () => channelBody, expect: all, outsider: 200 },
   { method: 'post', route: 'POST /variants/:vid/solve', path: (f) => `/api/variants/${f.vid}/solve`, body: () => ({ scenarioId: 'idle' }), expect: design },
   {
