@@ -28,6 +28,13 @@ export type MatrixSort = { by: number | 'label' | 'total'; descending: boolean }
 /** Unit label of a mode, for captions and legends. */
 export const modeUnit: Record<MatrixMode, string> = { resistance: 'K/W', percent: '% of self', kelvin: 'K' };
 
+/** What the cells mean, one sentence per mode (shown under the table). */
+export const modeCaption: Record<MatrixMode, string> = {
+  resistance: 'Cells: rise of the row part per watt in the column part (influence coefficient R_ij, K/W).',
+  percent: "Cells: R_ij as % of the row part's own R_ii — what a watt in the column part does to the row part, against a watt of its own.",
+  kelvin: "Cells: kelvin the column part's power adds to the row part in this scenario (R_ij·P_j); Rise: their sum, above the fluid.",
+};
+
 /** Cell text for a mode: K/W to 3 decimals, % and K to 1. */
 export function formatCell(v: number, mode: MatrixMode): string {
   if (!Number.isFinite(v)) return '—';

@@ -16,7 +16,7 @@ describe('CouplingMatrix', () => {
     expect(cells(w, 'io')).toEqual(['6.3', '100.0', '25.0']);
     await w.setProps({ mode: 'kelvin' });
     expect(cells(w, 'io')).toEqual(['5.0', '8.0', '0.4', '13.4']);
-    expect(w.text()).toContain('in K.');
+    expect(w.text()).toContain('R_ij·P_j');
   });
 
   test('sorts rows by a column, toggling the direction', async () => {
