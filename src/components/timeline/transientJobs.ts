@@ -27,7 +27,7 @@ export function impedanceJob(model: Model, count: number, hooks: LongRunHooks = 
   const { network, ...fit } = fitFosterNetwork({ times: imp.times, Z: imp.Z, steady: imp.steady, labels, sourceNodes, sourceLabels: imp.sourceLabels });
   const n = laplace.nodeCount;
   const nodeSteady = Array.from({ length: n }, (_, j) => Array.from(laplace.steady.R.subarray(j * n, (j + 1) * n)));
-  const method = `Stehfest inversion at ${imp.times.length} times (${imp.evaluations} Laplace evaluations); Foster fit with ${network.tau.length} time constants`;
+  const method = `Stehfest inversion at ${imp.times.length} times (${imp.evaluations} Laplace evaluations)`;
   return {
     times: imp.times, Z: imp.Z, steady: imp.steady, nodeSteady, baseTemperatures: Array.from(laplace.steady.offsets),
     sourceKeys: imp.sourceLabels, settleTime: imp.settleTime, checks: imp.checks, fit, network: { ...network, sourceNodes }, method,

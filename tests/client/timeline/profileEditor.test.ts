@@ -29,7 +29,7 @@ describe('ProfileEditor', () => {
     const w = mountEditor();
     const part = w.find('[data-test="part-profile-cpu-w"]');
     expect(part.text()).toContain('1 segment, 4 s');
-    const values = part.findAllComponents(NInputNumber).map((c) => (c.props as (k: string) => unknown)('value'));
+    const values = (part.findAllComponents(NInputNumber) as unknown as { props: (key: string) => unknown }[]).map((c) => c.props('value'));
     expect(values).toEqual([145, 35, 50, 50, 40]);
   });
 
@@ -71,7 +71,7 @@ describe('ProfileEditor', () => {
   test('read-only: no add or remove buttons, inputs disabled', () => {
     const w = mountEditor(true);
     expect(w.find('[data-test="add-steady"]').exists()).toBe(false);
-    expect(w.findAllComponents(NInputNumber).every((c) => c.props('disabled'))).toBe(true);
+    expect((w.findAllComponents(NInputNumber) as unknown as { props: (key: string) => unknown }[]).every((c) => c.props('disabled'))).toBe(true);
   });
 });
 

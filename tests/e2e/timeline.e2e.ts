@@ -1,0 +1,50 @@
+/** Timeline in the browser: the demo variant's impedance, the boost pulse profile, a timing sentence; screenshots light and dark. */
+import { afterAll, beforeAll, expect, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openBrowser, shot, signIn } from './browser';
+
+let page: Page;
+let close: () => Promise<void>;
+
+beforeAll(async () => {
+  ({ page, close } = await openBrowser());
+});
+afterAll(async () => close?.());
+
+async function openTimeline(): Promise<number> {
+  await page.locator('[data-test="project-link"]').first().click();
+  await page.locator('[data-test="assembly-link"]').first().click();
+  await page.locator('[data-test="variant-link"]').first().click();
+  await page.locator('[data-test="variant-name"]').waitFor();
+  const t0 = Date.now();
+  await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
+  await page.locator('[data-test="fit-note"]').waitFor({ timeout: 120000 });
+  return Date.now() - t0;
+}
+
+test('the engineer runs the boost pulse profile and reads the timing answers', async () => {
+  await signIn(page, 'engineer');
+  const impedanceMs = await openTimeline();
+  console.log(`impedance in the browser: ${(impedanceMs / 1000).toFixed(1)} s (tab click to fit note)`);
+  await expect(page.locator('[data-test="timeline-scenario"]').textContent()).resolves.toContain('Boost');
+  await expect(page.locator('[data-test="part-profile-cpu-w"] [data-test="segment-pulses"]').count()).resolves.toBe(1);
+  await page.locator('[data-test="run-profile"]').click();
+  await page.locator('[data-test="peak-table"]').waitFor();
+  await expect(page.locator('[data-test="limit-line"]').count()).resolves.toBeGreaterThanOrEqual(2);
+  await page.locator('[data-test="timing-boost"]').waitFor({ timeout: 30000 });
+  const text = await page.locator('[data-test="timing-boost"]').textContent();
+  console.log(`timing: ${text}`);
+  expect(text).toMatch(/Compute chiplet South (reaches|stays below|is already)/);
+  await page.locator('[data-test="temperature-panel"] [data-test="chart-hover"]').hover({ position: { x: 300, y: 100 } });
+  await page.locator('[data-test="chart-readout"]').waitFor();
+  await shot(page, 'timeline-light');
+});
+
+test('the timeline reads well in the dark theme', async () => {
+  await page.evaluate(() => localStorage.setItem('heatloom.theme', 'dark'));
+  await page.reload();
+  await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
+  await page.locator('[data-test="fit-note"]').waitFor({ timeout: 120000 });
+  await page.locator('[data-test="timing-boost"]').waitFor({ timeout: 30000 });
+  await shot(page, 'timeline-dark');
+});
