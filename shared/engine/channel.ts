@@ -64,7 +64,14 @@ export function channelModes(channel: Channel, sources: readonly RectSource[], o
     const t = options.truncation ?? remembered!;
     checkTruncation(t, maxModes);
     table = cache.table(channel, t.m, t.n, s);
-    truncation = { m: t.m, n: t.n, auto: !options.truncation, converged: remembered?.converged ?? true, lastChange: remembered?.lastChange ?? 0 };
+    truncation = {
+      m: t.m,
+      n: t.n,
+      auto: !options.truncation,
+      converged: remembered?.converged ?? true,
+      lastChange: remembered?.lastChange ?? 0,
+      roughSources: remembered?.roughSources ?? [],
+    };
   } else {
     const found = autoTruncation(channel, sources, cache, { tolerance, maxModes, s });
     table = found.table;

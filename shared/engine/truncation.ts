@@ -18,6 +18,24 @@ export interface TruncationReport extends Truncation {
   converged: boolean;
   /** Relative change of the largest self-resistance at the last doubling (or the Richardson correction when the cap allowed one level); 0 when fixed. */
   lastChange: number;
+  /**
+   * Sources left out of the search because their area is below SMALL_SOURCE_FRACTION of the largest
+   * (tiny passives would otherwise multiply the modes needed); their own figures are rough.
+   */
+  roughSources: number[];
+}
+
+/** Sources smaller than this fraction of the largest source's area do not steer the truncation. */
+export const SMALL_SOURCE_FRACTION = 0.01;
+
+/** Indices of the sources that steer the truncation, and of those too small to. */
+export function splitBySize(sources: readonly RectSource[]): { steering: number[]; rough: number[] } {
+  const areas = sources.map((q) => q.width * q.height);
+  const largest = Math.max(...areas);
+  const steering: number[] = [];
+  const rough: number[] = [];
+  areas.forEach((a, i) => (a >= SMALL_SOURCE_FRACTION * largest ? steering : rough).push(i));
+  return { steering, rough };
 }
 
 /** Settings of the truncation search. */
@@ -63,19 +81,21 @@ export function autoTruncation(
   cache: ImpedanceCache,
   settings: TruncationSettings,
 ): { report: TruncationReport; table: ModalTable } {
-  let m = startCount(channel.lx, Math.min(...sources.map((q) => q.width)));
-  let n = startCount(channel.ly, Math.min(...sources.map((q) => q.height)));
+  const { steering, rough } = splitBySize(sources);
+  const steer = steering.map((i) => sources[i]);
+  let m = startCount(channel.lx, Math.min(...steer.map((q) => q.width)));
+  let n = startCount(channel.ly, Math.min(...steer.map((q) => q.height)));
   if (m * n > settings.maxModes) {
     const shrink = Math.sqrt(settings.maxModes / (m * n));
     m = Math.max(1, Math.floor(m * shrink));
     n = Math.max(1, Math.floor(n * shrink));
   }
   let table = cache.table(channel, m, n, settings.s);
-  let prev = selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n));
+  let prev = selfInfluenceFromSpectra(table, buildSpectra(channel, steer, m, n));
   let lastChange = Infinity;
   for (let k = 0; k < CHANNEL_DEFAULTS.maxDoublings && 4 * m * n <= settings.maxModes; k++) {
     const finer = cache.table(channel, 2 * m, 2 * n, settings.s);
-    const next = selfInfluenceFromSpectra(finer, buildSpectra(channel, sources, 2 * m, 2 * n));
+    const next = selfInfluenceFromSpectra(finer, buildSpectra(channel, steer, 2 * m, 2 * n));
     lastChange = largestChange(next, prev);
     // Converged: doubling changes nothing that matters, so the current level is kept (the finer table stays cached).
     if (lastChange < settings.tolerance) break;
@@ -86,8 +106,8 @@ export function autoTruncation(
   }
   if (lastChange === Infinity) {
     // The cap allowed one level only: the size of its Richardson correction bounds its error.
-    lastChange = largestChange(prev, selfInfluenceFromSpectra(table, buildSpectra(channel, sources, m, n), 'raw'));
+    lastChange = largestChange(prev, selfInfluenceFromSpectra(table, buildSpectra(channel, steer, m, n), 'raw'));
   }
   const converged = lastChange < settings.tolerance;
-  return { report: { m, n, auto: true, converged, lastChange }, table };
+  return { report: { m, n, auto: true, converged, lastChange, roughSources: rough }, table };
 }

@@ -12,7 +12,7 @@ import { findScenario, nodePowers, partPowers } from './loads';
 import { assemblyNetwork, solveNetwork } from './network';
 import { planeMaps } from './planeMaps';
 import type { AssemblyResult, MapResult, PartResult } from './result';
-import { overlapWarnings } from './warnings';
+import { overlapWarnings, truncationWarnings } from './warnings';
 
 /** Options of solveAssembly (all optional). */
 export interface AssemblyOptions {
@@ -90,6 +90,6 @@ export function solveAssembly(model: Model, scenarioId?: string, options: Assemb
     maps: { interposer: toMap(maps.interposer), lid: maps.lid ? toMap(maps.lid) : null },
     truncation: { lid: net.lid ? net.lid.modes.truncation : null, interposer: net.interposer.modes.truncation },
     idealisations: [...IDEALISATIONS],
-    warnings: overlapWarnings(net.geometry, model.settings.minGap),
+    warnings: [...overlapWarnings(net.geometry, model.settings.minGap), ...truncationWarnings(net)],
   };
 }

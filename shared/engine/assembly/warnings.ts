@@ -1,5 +1,6 @@
 /** Layout warnings the engine notices while solving (it still solves overlapping parts, by superposition). */
 import type { PartGeometry } from './geometry';
+import type { AssemblyNetwork } from './network';
 
 /** One sentence per pair of parts that overlap or sit closer than the minimum gap. */
 export function overlapWarnings(parts: readonly PartGeometry[], minGap: number): string[] {
@@ -17,4 +18,28 @@ export function overlapWarnings(parts: readonly PartGeometry[], minGap: number):
     }
   }
   return out;
+}
+
+/** Sentences for planes whose truncation stopped at the cap, and for parts too small to steer it. */
+export function truncationWarnings(net: AssemblyNetwork): string[] {
+  const rough = new Set<number>();
+  for (const plane of [net.lid, net.interposer]) plane?.modes.truncation.roughSources.forEach((k) => rough.add(plane.parts[k]));
+  const small = [...rough].sort((a, b) => a - b).map((p) => `"${net.geometry[p].part.name}"`);
+  const notes = small.length
+    ? [`${small.join(', ')} ${small.length > 1 ? 'are' : 'is'} much smaller than the other parts: the mode sums are sized for the larger parts, so ${small.length > 1 ? 'their' : 'its'} own figures are rough.`]
+    : [];
+  return [...notes, ...capWarnings(net)];
+}
+
+function capWarnings(net: AssemblyNetwork): string[] {
+  const planes = [
+    ['lid', net.lid],
+    ['interposer', net.interposer],
+  ] as const;
+  return planes
+    .filter(([, plane]) => plane && !plane.modes.truncation.converged)
+    .map(([name, plane]) => {
+      const t = plane!.modes.truncation;
+      return `The ${name} plane's mode sums stopped at the cap (${t.m} × ${t.n} modes) with a last change of ${(t.lastChange * 100).toPrecision(2)} %; very small parts make the sums converge slowly.`;
+    });
 }
