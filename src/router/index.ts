@@ -14,6 +14,7 @@ const routes: RouteRecordRaw[] = [
   { path: '/assemblies/:aid', name: 'assembly', component: () => import('@/pages/assembly/AssemblyPage.vue') },
   { path: '/assemblies/:aid/compare', name: 'compare', component: () => import('@/pages/compare/ComparePage.vue') },
   { path: '/w/:wid/library', name: 'library', component: () => import('@/pages/library/LibraryPage.vue') },
+  { path: '/variants/:vid/report', name: 'report', component: () => import('@/pages/report/ReportPage.vue') },
   { path: '/variants/:vid', name: 'variant', component: () => import('@/pages/variant/VariantPage.vue') },
   { path: '/:rest(.*)*', name: 'missing', component: () => import('@/pages/home/MissingPage.vue'), meta: { public: true } },
 ];
