@@ -14,6 +14,7 @@ import { openSessionStore } from './lib/sessionStore';
 import { resolveSessionSecret } from './lib/sessionSecret';
 import { cspDirectives } from './lib/csp';
 import { serveClient } from './lib/serveClient';
+import { requestLog } from './lib/requestLog';
 import { openDatabase } from './db/sequelize';
 import { initModels } from './db/models';
 import { migrate } from './db/migrate';
@@ -50,12 +51,13 @@ export async function createApp(config: Config): Promise<BuiltApp> {
 
   const sessions = openSessionStore(config.dataDir);
   const { generateToken, csrfSynchronisedProtection } = csrfSync();
-  const ctx: AppContext = { config, logger, mailer, generateCsrfToken: generateToken };
+  const ctx: AppContext = { config, logger, mailer, generateCsrfToken: generateToken, endOtherSessions: sessions.endOtherSessions };
 
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
   app.use(helmet({ contentSecurityPolicy: { useDefaults: false, directives: cspDirectives(config.cookieSecure) } }));
+  app.use('/api', requestLog(logger));
   app.use('/api', express.json({ limit: '2mb' }));
   app.use(
     '/api',

@@ -1,4 +1,4 @@
-/** What routers and services share: configuration, logger, mailer and the CSRF token generator. */
+/** What routers and services share: configuration, logger, mailer, CSRF token generator, session control. */
 import type { Request } from 'express';
 import type { Config } from '../config';
 import type { Logger } from './logger';
@@ -10,4 +10,6 @@ export interface AppContext {
   logger: Logger;
   mailer: Mailer;
   generateCsrfToken: (req: Request, overwrite?: boolean) => string;
+  /** End every other session of a user (after a password change). */
+  endOtherSessions: (userId: number, keepSid: string) => Promise<void>;
 }

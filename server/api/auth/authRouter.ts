@@ -37,7 +37,9 @@ export function authRouter(ctx: AppContext): Router {
   r.post('/password', limiter, async (req, res) => {
     const userId = requireUserId(req);
     await account.changePassword(userId, validate(passwordChangeSchema, req.body), ctx.config.argon2);
-    res.json(await startSession(req, userId, ctx.generateCsrfToken));
+    const view = await startSession(req, userId, ctx.generateCsrfToken);
+    await ctx.endOtherSessions(userId, req.sessionID);
+    res.json(view);
   });
 
   r.get('/setup', async (_req, res) => {

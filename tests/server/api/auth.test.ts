@@ -91,7 +91,7 @@ describe('auth', () => {
     expect(res.status).toBe(409);
   });
 
-  it('lets a user rename themselves and change their password (current one required)', async () => {
+  it('lets a user rename themselves and change their password (current one required, other sessions end)', async () => {
     const c = new Client(t.app);
     await c.login(demoUsers.owner.email, demoUsers.owner.password);
     const renamed = await c.patch('/api/auth/me', { name: 'Ada Q.' });
@@ -100,9 +100,14 @@ describe('auth', () => {
     expect((await c.post('/api/auth/password', { currentPassword: 'wrong-one', newPassword: 'a-brand-new-password' })).status).toBe(401);
     const same = await c.post('/api/auth/password', { currentPassword: demoUsers.owner.password, newPassword: demoUsers.owner.password });
     expect(same.status).toBe(400);
+    const elsewhere = new Client(t.app);
+    await elsewhere.login(demoUsers.owner.email, demoUsers.owner.password);
+    expect((await elsewhere.get('/api/auth/me')).status).toBe(200);
     const changed = await c.post('/api/auth/password', { currentPassword: demoUsers.owner.password, newPassword: 'a-brand-new-password' });
     expect(changed.status).toBe(200);
     c.token = changed.body.csrfToken;
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    expect((await elsewhere.get('/api/auth/me')).status, 'the other session ends with a password change').toBe(401);
     expect((await new Client(t.app).login(demoUsers.owner.email, demoUsers.owner.password)).status).toBe(401);
     expect((await new Client(t.app).login(demoUsers.owner.email, 'a-brand-new-password')).status).toBe(200);
     await c.post('/api/auth/password', { currentPassword: 'a-brand-new-password', newPassword: demoUsers.owner.password });
