@@ -46,6 +46,22 @@ describe('variants', () => {
     expect(now.model.parts[0].y).toBe(v1.model.parts[0].y);
   });
 
+  it('lets exactly one of two simultaneous saves of the same version win', async () => {
+    const id = await f.freshVariant();
+    const v = (await engineer.get(`/api/variants/${id}`)).body;
+    const a = structuredClone(v.model);
+    a.parts[0].x += 0.001;
+    const b = structuredClone(v.model);
+    b.parts[0].x -= 0.001;
+    const results = await Promise.all([engineer.put(`/api/variants/${id}`, { model: a, version: 1 }), f.owner.put(`/api/variants/${id}`, { model: b, version: 1 })]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    const winner = results.find((r) => r.status === 200)!.body;
+    const now = (await engineer.get(`/api/variants/${id}`)).body;
+    expect(now.version).toBe(2);
+    expect(now.model).toEqual(winner.model);
+    expect((await engineer.get(`/api/variants/${id}/versions`)).body).toHaveLength(2);
+  });
+
   it('keeps every save in the history and restores an old version as a new one', async () => {
     const id = await f.freshVariant();
     const v1 = (await engineer.get(`/api/variants/${id}`)).body;
