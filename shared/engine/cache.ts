@@ -11,7 +11,7 @@ import type { Channel, RectSource, Truncation } from './types';
 export interface RememberedTruncation extends Truncation {
   converged: boolean;
   lastChange: number;
-  roughSources: number[];
+  roughSources?: number[];
 }
 
 interface Entry {

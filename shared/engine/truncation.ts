@@ -22,7 +22,7 @@ export interface TruncationReport extends Truncation {
    * Sources left out of the search because their area is below SMALL_SOURCE_FRACTION of the largest
    * (tiny passives would otherwise multiply the modes needed); their own figures are rough.
    */
-  roughSources: number[];
+  roughSources?: number[];
 }
 
 /** Sources smaller than this fraction of the largest source's area do not steer the truncation. */

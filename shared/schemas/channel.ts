@@ -92,7 +92,7 @@ export interface ChannelResponse {
   peakRise: number[];
   peakAt: { x: number; y: number }[];
   /** roughSources: indices of sources below 1 % of the largest area, left out of the automatic search. */
-  truncation: { m: number; n: number; auto: boolean; converged: boolean; lastChange: number; roughSources: number[] };
+  truncation: { m: number; n: number; auto: boolean; converged: boolean; lastChange: number; roughSources?: number[] };
   /** Heat leaving through the top and bottom faces (W); relativeError = |up + down − power| / power. */
   energyBalance: { power: number; up: number; down: number; relativeError: number };
   /** Source-plane rise map (K), values[iy·nx + ix], cell centres, row 0 = lowest y; when requested. */

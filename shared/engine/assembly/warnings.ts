@@ -23,7 +23,7 @@ export function overlapWarnings(parts: readonly PartGeometry[], minGap: number):
 /** Sentences for planes whose truncation stopped at the cap, and for parts too small to steer it. */
 export function truncationWarnings(net: AssemblyNetwork): string[] {
   const rough = new Set<number>();
-  for (const plane of [net.lid, net.interposer]) plane?.modes.truncation.roughSources.forEach((k) => rough.add(plane.parts[k]));
+  for (const plane of [net.lid, net.interposer]) plane?.modes.truncation.roughSources?.forEach((k) => rough.add(plane.parts[k]));
   const small = [...rough].sort((a, b) => a - b).map((p) => `"${net.geometry[p].part.name}"`);
   const notes = small.length
     ? [`${small.join(', ')} ${small.length > 1 ? 'are' : 'is'} much smaller than the other parts: the mode sums are sized for the larger parts, so ${small.length > 1 ? 'their' : 'its'} own figures are rough.`]
