@@ -1,0 +1,20 @@
+/** Messages between the server and its engine worker threads (structured-clone safe). */
+import type { Model } from '@shared/schemas/model';
+import type { InputIssue } from '@shared/engine/errors';
+import type { MessagePort } from 'node:worker_threads';
+
+/** One unit of engine work for a worker thread. */
+export type EngineTask =
+  | { kind: 'assembly'; model: Model; scenarioId: string }
+  | { kind: 'channel'; body: unknown }
+  | { kind: 'impedance'; model: Model; count: number; port?: MessagePort };
+
+/** Progress message a long task posts on its port: fraction done, 0–1. */
+export interface ProgressMessage {
+  fraction: number;
+}
+
+/** What a worker answers: the result, or the failure described in words (errors lose their class across threads). */
+export type TaskOutcome =
+  | { ok: true; result: unknown; ms: number }
+  | { ok: false; error: { kind: 'input'; path: string; message: string; issues: InputIssue[] } | { kind: 'failed'; message: string }; ms: number };
