@@ -21,6 +21,7 @@ import { migrate } from './db/migrate';
 import { seedDemoIfEmpty } from './db/seeders/demoSeed';
 import { storeReceivedMail } from './api/outbox/outboxRepository';
 import { apiRoutes } from './api/routes';
+import { closePool } from './lib/workerPool';
 
 /** A built app with its resources; `close` releases them (server sockets are the caller's). */
 export interface BuiltApp {
@@ -83,6 +84,7 @@ export async function createApp(config: Config): Promise<BuiltApp> {
       if (fake) await fake.close();
       await sessions.close();
       await sequelize.close();
+      await closePool();
     },
   };
 }

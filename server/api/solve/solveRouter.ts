@@ -1,19 +1,18 @@
 /** Analyses: the stateless flux-channel solve and stored per-variant solves. */
 import { Router } from 'express';
-import { solveChannelRequest } from '@shared/engine';
 import { variantSolveSchema } from '@shared/schemas/solve';
 import { authorize, requireUserId } from '../../lib/permissions';
 import { validate } from '../../lib/validate';
 import { solveVariant, storedVariantResult } from './solveService';
-import { runEngine } from './runEngine';
+import { runEngineTask } from '../../lib/workerPool';
 
 /** Build the solve router. */
 export function solveRouter(): Router {
   const r = Router();
 
-  r.post('/solve/channel', (req, res) => {
+  r.post('/solve/channel', async (req, res) => {
     requireUserId(req);
-    res.json(runEngine(() => solveChannelRequest(req.body)));
+    res.json(await runEngineTask({ kind: 'channel', body: req.body }));
   });
 
   r.post('/variants/:vid/solve', async (req, res) => {

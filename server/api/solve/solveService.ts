@@ -1,5 +1,5 @@
 /** Stored analyses: solve one scenario of a variant's current model once per (model, scenario, engine version). */
-import { solveAssembly } from '@shared/engine';
+import type { AssemblyResult } from '@shared/engine';
 import type { Model } from '@shared/schemas/model';
 import type { StoredResult } from '@shared/schemas/solve';
 import pkg from '../../../package.json';
@@ -9,7 +9,7 @@ import { sha256 } from '../../lib/tokens';
 import { recordActivity } from '../activity/activityRepository';
 import { findVariant } from '../variants/variantsRepository';
 import * as repo from './solveRepository';
-import { runEngine } from './runEngine';
+import { runEngineTask } from '../../lib/workerPool';
 
 /** Result kind of the steady assembly solve. */
 export const ASSEMBLY_KIND = 'assembly-steady';
@@ -43,7 +43,7 @@ export async function solveVariant(a: Access, id: number, scenarioId?: string): 
   const base = { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash };
   const stored = await repo.findResult(id, ASSEMBLY_KIND, hash);
   if (stored) return { ...base, cached: true, createdAt: stored.createdAt.toISOString(), result: stored.result };
-  const result = runEngine(() => solveAssembly(v.model, sid));
+  const result = await runEngineTask<AssemblyResult>({ kind: 'assembly', model: v.model, scenarioId: sid });
   const createdAt = await repo.inTransaction(async (t) => {
     const at = await repo.storeResult(id, ASSEMBLY_KIND, hash, result, t);
     await recordActivity({ projectId: a.projectId!, variantId: id, actorId: a.userId, kind: 'analysis.stored', summary: `"${v.name}" version ${v.version}: solved scenario "${sid}"` }, t);
