@@ -90,3 +90,26 @@ describe('memory stack ladder', () => {
     expect(r.tierInfluence.matrix).toHaveLength(9);
   });
 });
+
+describe('lid placement', () => {
+  const parts = [logicPart('a', 0.006, 0.008, 0.006, 0.006), logicPart('b', 0.014, 0.008, 0.006, 0.006)];
+  const loads = { a: { power: 20 }, b: { power: 5 } };
+  const withLid = (offsetX: number, width: number) => {
+    const s = stack(W, H);
+    return model({ ...s, lid: { ...s.lid, width, offsetX } }, parts, loads);
+  };
+
+  it('a larger lid spreads better; an offset lid keeps the energy balance', () => {
+    const same = solveAssembly(withLid(0, W), 'run');
+    const larger = solveAssembly(withLid(0, W + 0.01), 'run');
+    const shifted = solveAssembly(withLid(0.004, W + 0.01), 'run');
+    expect(larger.parts[0].junction).toBeLessThan(same.parts[0].junction);
+    expect(shifted.energyBalance.relativeError).toBeLessThan(1e-9);
+    // Shifting the lid toward +x moves its centre away from part a (at low x): a gets warmer.
+    expect(shifted.parts[0].junction).toBeGreaterThan(larger.parts[0].junction);
+  });
+
+  it('a part reaching outside the lid is refused with its path', () => {
+    expect(() => solveAssembly(withLid(0.006, W), 'run')).toThrow(/outside the lid/);
+  });
+});
