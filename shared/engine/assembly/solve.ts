@@ -4,6 +4,7 @@
  */
 import type { Model } from '../../schemas/model';
 import type { ImpedanceCache } from '../cache';
+import { EngineInputError } from '../errors';
 import type { Truncation } from '../types';
 import { lidOrigin } from './geometry';
 import { hotSpots } from './hotspot';
@@ -36,6 +37,9 @@ export function solveAssembly(model: Model, scenarioId?: string, options: Assemb
   const state = solveNetwork(net, powers);
   const nn = net.nodes.length;
   const size = options.mapSize ?? ASSEMBLY_MAP_SIZE;
+  if (!(Number.isInteger(size) && size >= 8 && size <= 1024 && (size & (size - 1)) === 0)) {
+    throw new EngineInputError('mapSize', 'The map size must be a power of two from 8 to 1024 cells.');
+  }
   const maps = planeMaps(net, state, lidOrigin(model), size);
   const spots = hotSpots(net, state, scenario, maps);
   const totals = partPowers(net, powers);
