@@ -14,6 +14,7 @@ import { libraryRouter } from './library/libraryRouter';
 import { solveRouter } from './solve/solveRouter';
 import { healthRouter } from './health';
 import { ioRouter } from './io/ioRouter';
+import { jobsRouter } from '../workers/jobsRouter';
 
 /** All API routes (mounted at /api by app.ts). */
 export function apiRoutes(ctx: AppContext): Router {
@@ -31,5 +32,6 @@ export function apiRoutes(ctx: AppContext): Router {
   r.use(libraryRouter());
   r.use(solveRouter());
   r.use(ioRouter());
+  r.use(jobsRouter());
   return r;
 }
