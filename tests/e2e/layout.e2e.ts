@@ -1,7 +1,10 @@
 /** Layout screen in the browser: drag a memory stack beside a compute chiplet, see an overlap flagged, reviewer cannot drag. */
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
+import { partRect } from '@shared/layout/rules';
+import type { Model } from '@shared/schemas/model';
 import { openBrowser, shot, signIn } from './browser';
+import { besideMove } from './layoutTargets';
 
 let page: Page;
 let close: () => Promise<void>;
@@ -40,23 +43,30 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
   await signIn(page, 'engineer');
   await openFirstVariant(page);
   variantUrl = page.url();
-  const compute = page.locator('[data-test^="part-cpu"]').first();
-  if ((await page.locator('[data-test^="part-mem"]').count()) === 0) await page.locator('[data-test="add-memory"]').click();
-  const memory = page.locator('[data-test^="part-mem"]').first();
-  await memory.waitFor();
+  const vid = Number(variantUrl.split('/').pop());
+  const model = (await page.evaluate(async (id) => (await fetch(`/api/variants/${id}`)).json(), vid)).model as Model;
+  const move = besideMove(model);
+  expect(move, 'a free spot beside a compute chiplet in the demo variant').not.toBeNull();
+  const { memory: mem, compute: cpu } = move!;
   await shot(page, 'layout-engineer-start');
 
+  const compute = page.locator(`[data-test="part-${cpu.id}"]`);
+  const memory = page.locator(`[data-test="part-${mem.id}"]`);
   const c = await centre(compute.locator('rect.body'));
   const m = await centre(memory.locator('rect.body'));
-  const x0 = await mmOf(memory);
-  const target = { x: c.x + c.w / 2 + m.w / 2 + 12, y: c.y };
+  const pxPerMm = c.w / (partRect(cpu).w * 1000);
+  const target = { x: m.x + (move!.x - mem.x) * 1000 * pxPerMm, y: m.y - (move!.y - mem.y) * 1000 * pxPerMm };
+  const t0 = Date.now();
   await dragBy(page, m, target);
   const x1 = await mmOf(memory);
-  expect(Math.abs(x1 - x0), `memory x moved from ${x0} mm to ${x1} mm`).toBeGreaterThan(0.5);
-  await expect(page.locator('[data-test="rule-overlap"]').count()).resolves.toBe(0);
+  const y1 = Number(await memory.getAttribute('data-y-mm'));
+  console.log(`memory ${mem.id} moved from (${(mem.x * 1000).toFixed(1)}, ${(mem.y * 1000).toFixed(1)}) to (${x1}, ${y1}) mm beside ${cpu.id}; drag took ${Date.now() - t0} ms`);
+  expect(Math.abs(x1 - move!.x * 1000), 'x lands on the aimed spot (±0.3 mm)').toBeLessThan(0.3);
+  expect(Math.abs(y1 - move!.y * 1000), 'y lands on the aimed spot (±0.3 mm)').toBeLessThan(0.3);
+  await expect(page.locator('[data-test="rules-ok"]').count()).resolves.toBe(1);
   await shot(page, 'layout-engineer-beside');
 
-  await dragBy(page, await centre(memory.locator('rect.body')), { x: c.x + c.w / 4, y: c.y });
+  await dragBy(page, await centre(memory.locator('rect.body')), { x: c.x, y: c.y });
   await page.locator('[data-test="rule-overlap"]').first().waitFor();
   await expect(memory.getAttribute('data-rule')).resolves.toBe('error');
   await expect(page.locator('[data-test="solve-state"]').textContent()).resolves.toContain('Not solved');
@@ -67,6 +77,32 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
   await page.locator('[data-test="save"]').click();
   await page.locator('[data-test="version"]').filter({ hasText: 'v2' }).waitFor();
 });
+
+test('the Stack and Loads screens open on the same variant (screenshots, light and dark)', async () => {
+  await memorySelected();
+  await page.locator('.n-tabs-tab[data-name="stack"]').click();
+  await page.locator('[data-test="cross-section"]').waitFor();
+  await shot(page, 'stack-engineer');
+  await page.locator('.n-tabs-tab[data-name="loads"]').click();
+  await page.locator('[data-test="loads-table"]').waitFor();
+  await page.locator('[data-test^="tiers-mem"]').first().click();
+  await shot(page, 'loads-engineer');
+  await page.evaluate(() => localStorage.setItem('heatloom.theme', 'dark'));
+  await page.reload();
+  await page.locator('[data-test="layout-canvas"]').waitFor();
+  await shot(page, 'layout-engineer-dark');
+  await page.locator('.n-tabs-tab[data-name="stack"]').click();
+  await page.locator('[data-test="cross-section"]').waitFor();
+  await shot(page, 'stack-engineer-dark');
+  await page.locator('.n-tabs-tab[data-name="loads"]').click();
+  await page.locator('[data-test="loads-table"]').waitFor();
+  await shot(page, 'loads-engineer-dark');
+  await page.evaluate(() => localStorage.setItem('heatloom.theme', 'light'));
+});
+
+async function memorySelected(): Promise<void> {
+  await page.locator('[data-test^="part-mem"] rect.body').first().click();
+}
 
 test('the reviewer sees the layout but cannot drag a part', async () => {
   const { page: rp, close: rclose } = await openBrowser();

@@ -9,19 +9,26 @@ import { partRect } from '@shared/layout/rules';
 import type { LayerRow } from './layerRows';
 
 /** One drawn rectangle, px. */
-export interface SectionRect { key: string; x: number; y: number; w: number; h: number; role: LayerRow['role']; layer: Layer; thin: boolean }
+export interface SectionRect { key: string; x: number; y: number; w: number; h: number; role: LayerRow['role']; layer: Layer; thin: boolean; stripes?: number }
 /** One label at the right with a leader to its layer, px. */
 export interface SectionLabel { key: string; text: string; y: number; anchorX: number; anchorY: number }
 
 /** Drawing options: size and the minimum visible layer height (px). */
-export const SECTION = { width: 780, drawWidth: 470, height: 250, margin: 14, minPx: 4, labelGap: 13 };
+export const SECTION = { width: 900, drawWidth: 470, height: 250, margin: 14, minPx: 4, labelGap: 13 };
 
 const um = (t: number) => `${Math.round(t * 1e6).toLocaleString('en-US')} µm`;
 const describe = (name: string, l: Layer) => `${l.name ?? name}${l.material ? ` · ${l.material}` : ''} · ${um(l.thickness)}`;
 
-function column(p: Part): { role: LayerRow['role']; layer: Layer; name: string }[] {
-  const out: { role: LayerRow['role']; layer: Layer; name: string }[] = [{ role: 'bumps', layer: p.bumps, name: 'bumps' }, { role: 'die', layer: p.die, name: 'die' }];
-  for (let i = 0; p.memory && i < p.memory.tiers; i++) out.push({ role: 'bond', layer: p.memory.bond, name: 'bond' }, { role: 'tier', layer: p.memory.tier, name: 'tier' });
+type Slice = { role: LayerRow['role']; layer: Layer; name: string; stripes?: number };
+
+/** A part's layers from the interposer up; a memory stack's tiers and bonds are one block with its true total thickness. */
+function column(p: Part): Slice[] {
+  const out: Slice[] = [{ role: 'bumps', layer: p.bumps, name: 'bumps' }, { role: 'die', layer: p.die, name: 'die' }];
+  if (p.memory) {
+    const { tiers, tier, bond } = p.memory;
+    const layer = { ...tier, name: `${tiers} DRAM tiers (${um(tier.thickness)} + ${um(bond.thickness)} bond each)`, material: undefined, thickness: tiers * (tier.thickness + bond.thickness) };
+    out.push({ role: 'tier', layer, name: 'tiers', stripes: tiers });
+  }
   if (p.tim1) out.push({ role: 'tim', layer: p.tim1, name: 'TIM1' });
   return out;
 }
@@ -43,9 +50,9 @@ export function crossSection(model: Model, selection: string[]) {
   const rects: SectionRect[] = [];
   const labels: SectionLabel[] = [];
   let z = SECTION.height - SECTION.margin;
-  const push = (key: string, x0: number, x1: number, base: number, role: LayerRow['role'], layer: Layer, name: string, label: boolean) => {
+  const push = (key: string, x0: number, x1: number, base: number, role: LayerRow['role'], layer: Layer, name: string, label: boolean, stripes?: number) => {
     const h = d(layer);
-    rects.push({ key, x: X(x0), y: base - h, w: (x1 - x0) * sx, h, role, layer, thin: layer.thickness * sv < SECTION.minPx });
+    rects.push({ key, x: X(x0), y: base - h, w: (x1 - x0) * sx, h, role, layer, thin: layer.thickness * sv < SECTION.minPx, stripes });
     if (label) labels.push({ key, text: describe(name, layer), y: base - h / 2, anchorX: X(x1), anchorY: base - h / 2 });
     return base - h;
   };
@@ -59,7 +66,7 @@ export function crossSection(model: Model, selection: string[]) {
   for (const p of cut) {
     const r = partRect(p);
     let top = z;
-    column(p).forEach((c, i) => { top = push(`${p.id}.${i}`, r.x0, r.x1, top, c.role, c.layer, `${p.name} ${c.name}`, p === rep && (c.role !== 'tier' && c.role !== 'bond' || i <= 3)); });
+    column(p).forEach((c, i) => { top = push(`${p.id}.${i}`, r.x0, r.x1, top, c.role, c.layer, `${p.name} ${c.name}`, p === rep, c.stripes); });
     lidBase = Math.min(lidBase, top);
   }
   z = lidBase;
