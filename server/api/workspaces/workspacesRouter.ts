@@ -1,4 +1,4 @@
-/** /api/workspaces: my workspaces, create/rename, its members (roles, removal by owners). */
+/** /api/workspaces: my workspaces, create/rename, its members (roles and removal by owners; anyone may leave). */
 import { Router } from 'express';
 import { memberRoleSchema, workspaceNameSchema } from '@shared/schemas/workspaces';
 import { authorize, parseId, requireUserId } from '../../lib/permissions';
@@ -50,8 +50,9 @@ export function workspacesRouter(): Router {
   });
 
   r.delete('/workspaces/:wid/members/:uid', async (req, res) => {
-    const a = await authorize(req, 'workspace', req.params.wid, 'members.manage');
     const uid = parseId(req.params.uid, 'Member');
+    const leaving = uid === requireUserId(req);
+    const a = await authorize(req, 'workspace', req.params.wid, leaving ? 'workspace.read' : 'members.manage');
     const result = await repo.removeMember(a.workspaceId, uid);
     if (result === false) throw new NotFoundError('Member');
     if (result === 'last_owner') throw lastOwner();

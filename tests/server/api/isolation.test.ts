@@ -57,4 +57,13 @@ describe('isolation', () => {
     expect((await f.owner.del(`/api/workspaces/${f.wid}/members/${me}`)).status).toBe(409);
     expect((await f.owner.del(`/api/workspaces/${f.wid}/members/999999`)).status).toBe(404);
   });
+
+  it('lets a member leave a workspace on their own', async () => {
+    const uid = await f.freshMember('reviewer');
+    const leaver = new Client(t.app);
+    const email = (await f.owner.get(`/api/workspaces/${f.wid}/members`)).body.find((m: { userId: number }) => m.userId === uid).email;
+    await leaver.login(email, 'member-password-1');
+    expect((await leaver.del(`/api/workspaces/${f.wid}/members/${uid}`)).status).toBe(204);
+    expect((await leaver.get(`/api/workspaces/${f.wid}`)).status).toBe(404);
+  });
 });
