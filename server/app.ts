@@ -22,6 +22,7 @@ import { seedDemoIfEmpty } from './db/seeders/demoSeed';
 import { storeReceivedMail } from './api/outbox/outboxRepository';
 import { apiRoutes } from './api/routes';
 import { closePool } from './lib/workerPool';
+import { assertWritableDataDir, storageErrors } from './lib/storageErrors';
 
 /** A built app with its resources; `close` releases them (server sockets are the caller's). */
 export interface BuiltApp {
@@ -39,6 +40,7 @@ export interface BuiltApp {
 /** Build the app: migrate the database, start the fake SMTP server if needed, seed the demo when empty. */
 export async function createApp(config: Config): Promise<BuiltApp> {
   const logger = createLogger(config.logLevel);
+  assertWritableDataDir(config.dataDir);
   const sequelize = await openDatabase(config.dataDir);
   initModels(sequelize);
   const applied = await migrate(sequelize);
@@ -75,6 +77,7 @@ export async function createApp(config: Config): Promise<BuiltApp> {
   app.use('/api', apiRoutes(ctx));
   app.use('/api', apiNotFound);
   if (config.env !== 'test') serveClient(app, config.clientDistDir);
+  app.use(storageErrors(logger));
   app.use(errorMiddleware(logger));
 
   return {
