@@ -11,7 +11,8 @@ const root = join(__dirname, '..', '..');
 const dir = mkdtempSync(join(tmpdir(), 'heatloom-cli-'));
 
 function cli(...args: string[]): { status: number | null; stdout: string; stderr: string } {
-  const r = spawnSync(join(root, 'node_modules', '.bin', 'tsx'), ['server/cli.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60000 });
+  // node --import tsx: one process (the tsx binary would start a second node).
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60000 });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
