@@ -5,6 +5,7 @@
  * extra spreading in the die — conservative) plus the part's own power-map non-uniformity.
  */
 import type { Scenario } from '../../schemas/model';
+import { defaultImpedanceCache, type ImpedanceCache } from '../cache';
 import { nextPow2 } from '../field';
 import type { Channel } from '../types';
 import { plain } from './geometry';
@@ -26,6 +27,9 @@ function upResistance(net: AssemblyNetwork, p: number): number | null {
   return col.links.reduce((a, b) => a + b, 0) + col.rUp;
 }
 
+/** Round a face conductance to 3 significant digits so small drags re-use the cached local table. */
+const round3 = (v: number): number => (v > 0 ? Number(v.toPrecision(3)) : 0);
+
 function localChannel(net: AssemblyNetwork, p: number, ru: number | null): Channel {
   const g = net.geometry[p];
   const part = g.part;
@@ -37,13 +41,19 @@ function localChannel(net: AssemblyNetwork, p: number, ru: number | null): Chann
   return {
     lx: g.footprint.width,
     ly: g.footprint.height,
-    above: { layers: [plain(part.die)], h: rest > 0 && Number.isFinite(rest) ? 1 / rest : 0 },
-    below: { layers: [plain(part.bumps)], h: 1 / (g.area * Math.max(ipSelf, 1e-12)) },
+    above: { layers: [plain(part.die)], h: rest > 0 && Number.isFinite(rest) ? round3(1 / rest) : 0 },
+    below: { layers: [plain(part.bumps)], h: round3(1 / (g.area * Math.max(ipSelf, 1e-12))) },
   };
 }
 
 /** Hot spot of every part for a solved state and its plane maps. */
-export function hotSpots(net: AssemblyNetwork, state: NetworkState, scenario: Scenario, maps: { interposer: PlacedMap; lid: PlacedMap | null }): HotSpot[] {
+export function hotSpots(
+  net: AssemblyNetwork,
+  state: NetworkState,
+  scenario: Scenario,
+  maps: { interposer: PlacedMap; lid: PlacedMap | null },
+  cache: ImpedanceCache = defaultImpedanceCache,
+): HotSpot[] {
   return net.geometry.map((g, p) => {
     const ru = upResistance(net, p);
     const rd = net.columns[p].rDown;
@@ -53,7 +63,7 @@ export function hotSpots(net: AssemblyNetwork, state: NetworkState, scenario: Sc
     const rotated = load.map ? rotateMap(load.map, g.part.rotation) : null;
     const gx = nextPow2(Math.max(32, 2 * (rotated?.nx ?? 0)));
     const gy = nextPow2(Math.max(32, 2 * (rotated?.ny ?? 0)));
-    const own = rotated && load.power > 0 ? powerMapField(localChannel(net, p, ru), rotated, load.power, gx, gy) : null;
+    const own = rotated && load.power > 0 ? powerMapField(localChannel(net, p, ru), rotated, load.power, gx, gy, cache) : null;
     const fp = g.footprint;
     const x0 = fp.x - fp.width / 2;
     const y0 = fp.y - fp.height / 2;

@@ -5,7 +5,7 @@
  * already carries the mean. Separable spectrum F = Fxᵀ·(P·w)·Fy (cells lie on a grid).
  */
 import type { PowerMap } from '../../schemas/model';
-import { weightedImpedanceTable } from '../impedance';
+import type { ImpedanceCache } from '../cache';
 import { fieldMap, sigmaFactors, type FieldMap } from '../field';
 import { sinc } from '../spectrum';
 import type { Channel } from '../types';
@@ -44,10 +44,19 @@ function cellSpectra(cells: number, length: number, modes: number): Float64Array
 }
 
 /** Non-uniform part of the junction-face rise (K) for power P spread by the rotated map, on a gx × gy grid. */
-export function powerMapField(channel: Channel, grid: { nx: number; ny: number; w: Float64Array }, power: number, gx: number, gy: number): FieldMap {
-  const m = Math.min(1024, 16 * grid.nx);
-  const n = Math.min(1024, 16 * grid.ny);
-  const table = weightedImpedanceTable(channel, m, n);
+export function powerMapField(
+  channel: Channel,
+  grid: { nx: number; ny: number; w: Float64Array },
+  power: number,
+  gx: number,
+  gy: number,
+  cache: ImpedanceCache,
+): FieldMap {
+  const m = Math.max(64, Math.min(512, 8 * grid.nx));
+  const n = Math.max(64, Math.min(512, 8 * grid.ny));
+  const modal = cache.table(channel, m, n);
+  const table = modal.w;
+  const stride = modal.n;
   const fx = cellSpectra(grid.nx, channel.lx, m);
   const fy = cellSpectra(grid.ny, channel.ly, n);
   let total = 0;
@@ -69,7 +78,7 @@ export function powerMapField(channel: Channel, grid: { nx: number; ny: number; 
   }
   const sx = sigmaFactors(m);
   const sy = sigmaFactors(n);
-  for (let a = 0; a < m; a++) for (let b = 0; b < n; b++) theta[a * n + b] *= table[a * n + b] * sx[a] * sy[b];
+  for (let a = 0; a < m; a++) for (let b = 0; b < n; b++) theta[a * n + b] *= table[a * stride + b] * sx[a] * sy[b];
   theta[0] = 0;
   return fieldMap(theta, m, n, channel.lx, channel.ly, gx, gy);
 }

@@ -3,7 +3,7 @@
  * memory tiers, heat split, JEDEC-style figures, influence matrices, energy balance and plane maps.
  */
 import type { Model } from '../../schemas/model';
-import type { ImpedanceCache } from '../cache';
+import { defaultImpedanceCache, ImpedanceCache } from '../cache';
 import { EngineInputError } from '../errors';
 import type { Truncation } from '../types';
 import { lidOrigin } from './geometry';
@@ -41,7 +41,7 @@ export function solveAssembly(model: Model, scenarioId?: string, options: Assemb
     throw new EngineInputError('mapSize', 'The map size must be a power of two from 8 to 1024 cells.');
   }
   const maps = planeMaps(net, state, lidOrigin(model), size);
-  const spots = hotSpots(net, state, scenario, maps);
+  const spots = hotSpots(net, state, scenario, maps, options.cache === null ? new ImpedanceCache(4) : (options.cache ?? defaultImpedanceCache));
   const totals = partPowers(net, powers);
   // contributions[i][j]: rise of part i's junction caused by all of part j's nodes.
   const contributions = net.geometry.map((_, i) =>
