@@ -48,9 +48,10 @@ function copyPages(db: sqlite3.Database, file: string, toFile: boolean): Promise
   });
 }
 
-/** `PRAGMA integrity_check` of a database file: 'ok' or the problems SQLite lists. */
+/** `PRAGMA integrity_check` of a database file: 'ok' or the problems SQLite lists (read-write open so a left-over WAL is recovered first). */
 export async function integrityCheck(file: string): Promise<string> {
-  const db = await open(file, sqlite3.OPEN_READONLY);
+  if (!fs.existsSync(file)) throw new Error(`no database at ${file}`);
+  const db = await open(file, sqlite3.OPEN_READWRITE);
   try {
     const rows = await all<{ integrity_check: string }>(db, 'PRAGMA integrity_check');
     return rows.map((r) => r.integrity_check).join('; ');
