@@ -103,3 +103,16 @@ export function networkStep(network: FosterNetwork, t: number): number[][] {
   const e = network.tau.map((tk) => -Math.expm1(-t / tk));
   return network.R.map((row) => row.map((terms) => terms.reduce((s, r, k) => s + r * e[k], 0)));
 }
+
+/** The same network restricted to some rows (nodes); sources keep their columns, sourceNodes are re-indexed (−1 if dropped). */
+export function selectRows(network: FosterNetwork, rows: readonly number[]): FosterNetwork {
+  const where = new Map(rows.map((j, q) => [j, q]));
+  const sources = network.R[0]?.length ?? 0;
+  return {
+    tau: network.tau,
+    R: rows.map((j) => network.R[j]),
+    labels: rows.map((j) => network.labels[j]),
+    sourceLabels: network.sourceLabels ?? network.labels.slice(0, sources),
+    sourceNodes: Array.from({ length: sources }, (_, i) => where.get(network.sourceNodes?.[i] ?? i) ?? -1),
+  };
+}

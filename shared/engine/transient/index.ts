@@ -7,6 +7,7 @@ export { fitFoster, fosterStep, logSpacedTaus, signedFosterDesign, FOSTER_FIT_DE
 export {
   fitFosterNetwork,
   networkStep,
+  selectRows,
   FOSTER_NETWORK_DEFAULTS,
   type FosterNetwork,
   type FosterNetworkFit,

@@ -74,6 +74,14 @@ describe('profile simulation', () => {
     expect(() => simulateProfile(net2, { bounds: long.bounds, power: long.power.map((p) => [p[0], 0]) }, { baseTemperatures: [0, 0], samplesPerInterval: 2 })).toThrow(EngineInputError);
   });
 
+  it('computes only the chosen rows, identical to the full run', () => {
+    const schedule = scheduleFromSegments([[{ kind: 'pulses', onPower: 90, offPower: 5, onTime: 0.002, offTime: 0.003, repeats: 4 }], undefined], [0, 3]);
+    const full = simulateProfile(net2, schedule, { baseTemperatures: [40, 41], samplesPerInterval: 3 });
+    const one = simulateProfile(net2, schedule, { baseTemperatures: [40, 41], samplesPerInterval: 3, rows: [1] });
+    expect(one.temperatures).toHaveLength(1);
+    one.temperatures[0].forEach((t, s) => expectClose(t, full.temperatures[1][s], 1e-12, 0, `T1[${s}]`));
+  });
+
   it('can be cancelled from a long loop', () => {
     const long = scheduleFromSegments([[{ kind: 'pulses', onPower: 1, offPower: 0, onTime: 1, offTime: 1, repeats: 2000 }], undefined], [0, 0]);
     let polls = 0;
