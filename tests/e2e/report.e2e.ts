@@ -43,3 +43,28 @@ test('a reviewer opens the report of demo variant A (compared with B) and prints
   expect(readFileSync(pdf).subarray(0, 5).toString()).toBe('%PDF-');
   expect(statSync(pdf).size).toBeGreaterThan(20000);
 });
+
+/** Pick an Export menu entry and return the downloaded file's name and content. */
+async function exportEntry(label: string): Promise<{ name: string; body: Buffer }> {
+  await page.locator('[data-test="export-menu"]').click();
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByText(label, { exact: true }).click()]);
+  const path = await download.path();
+  return { name: download.suggestedFilename(), body: readFileSync(path!) };
+}
+
+test('the Export menu saves the model, CSVs, the netlist and the layout as SVG and PNG', async () => {
+  await page.emulateMedia({ media: 'screen' });
+  const model = await exportEntry('Model (JSON, SI units)');
+  expect(model.name).toMatch(/\.heatloom\.json$/);
+  expect(JSON.parse(model.body.toString()).header.units.length).toBe('m');
+  const temps = await exportEntry('Temperatures, all scenarios (CSV, °C)');
+  expect(temps.body.toString()).toContain('mean temperature (°C)');
+  const netlist = await exportEntry('SPICE netlist, steady matrix only');
+  expect(netlist.body.toString()).toMatch(/1 V = 1 degC/);
+  const svg = await exportEntry('Layout diagram (SVG)');
+  expect(svg.name).toMatch(/layout\.svg$/);
+  expect(svg.body.toString()).toMatch(/^<\?xml[\s\S]*<svg[\s\S]*Compute chiplet South/);
+  const png = await exportEntry('Layout diagram (PNG)');
+  expect(png.body.subarray(1, 4).toString()).toBe('PNG');
+  expect(png.body.length).toBeGreaterThan(5000);
+});
