@@ -2,7 +2,8 @@
  * Junction hot spot of each part: mean junction temperature plus the largest local excess over the
  * footprint, where the excess is the planes' variation under the part passed through the column as a
  * 1-D divider (up path R_u, down path R_d: δT_j = (R_d·δT_lid + R_u·δT_interposer)/(R_u + R_d), no
- * extra spreading in the die — conservative) plus the part's own power-map non-uniformity.
+ * extra spreading in the die — conservative) plus the part's own power-map non-uniformity from a flux
+ * channel of its footprint holding the whole vertical stack.
  */
 import type { Scenario } from '../../schemas/model';
 import { defaultImpedanceCache, type ImpedanceCache } from '../cache';
@@ -27,22 +28,24 @@ function upResistance(net: AssemblyNetwork, p: number): number | null {
   return col.links.reduce((a, b) => a + b, 0) + col.rUp;
 }
 
-/** Round a face conductance to 3 significant digits so small drags re-use the cached local table. */
-const round3 = (v: number): number => (v > 0 ? Number(v.toPrecision(3)) : 0);
-
-function localChannel(net: AssemblyNetwork, p: number, ru: number | null): Channel {
+/**
+ * Vertical stack of one part for its power-map spreading: everything above the junction (die, memory
+ * bonds and tiers, TIM1, lid) to h_top and everything below (bumps, interposer, C4, substrate) to h_bottom,
+ * cut to the part's footprint. Only non-uniform modes are used, for which the cut matters little.
+ */
+function localChannel(net: AssemblyNetwork, p: number): Channel {
   const g = net.geometry[p];
   const part = g.part;
-  const dieR = part.die.thickness / part.die.kz;
-  const lidSelf = net.lid && ru !== null ? net.lid.flat[net.lid.parts.indexOf(p) * net.lid.parts.length + net.lid.parts.indexOf(p)] : 0;
-  const rest = ru === null ? Infinity : g.area * (ru + lidSelf) - dieR;
-  const ipIndex = net.interposer.parts.indexOf(p);
-  const ipSelf = net.interposer.flat[ipIndex * net.interposer.parts.length + ipIndex];
+  const up = [plain(part.die)];
+  if (part.memory) for (let k = 0; k < part.memory.tiers; k++) up.push(plain(part.memory.bond), plain(part.memory.tier));
+  const toLid = part.tim1 !== null && net.lid !== null;
+  if (toLid) up.push(plain(part.tim1!), ...net.lid!.channel.above.layers);
+  const below = net.interposer.channel.below;
   return {
     lx: g.footprint.width,
     ly: g.footprint.height,
-    above: { layers: [plain(part.die)], h: rest > 0 && Number.isFinite(rest) ? round3(1 / rest) : 0 },
-    below: { layers: [plain(part.bumps)], h: round3(1 / (g.area * Math.max(ipSelf, 1e-12))) },
+    above: { layers: up, h: toLid ? net.lid!.channel.above.h : 0 },
+    below: { layers: [plain(part.bumps), ...below.layers], h: below.h },
   };
 }
 
@@ -63,7 +66,7 @@ export function hotSpots(
     const rotated = load.map ? rotateMap(load.map, g.part.rotation) : null;
     const gx = nextPow2(Math.max(32, 2 * (rotated?.nx ?? 0)));
     const gy = nextPow2(Math.max(32, 2 * (rotated?.ny ?? 0)));
-    const own = rotated && load.power > 0 ? powerMapField(localChannel(net, p, ru), rotated, load.power, gx, gy, cache) : null;
+    const own = rotated && load.power > 0 ? powerMapField(localChannel(net, p), rotated, load.power, gx, gy, cache) : null;
     const fp = g.footprint;
     const x0 = fp.x - fp.width / 2;
     const y0 = fp.y - fp.height / 2;

@@ -52,8 +52,8 @@ export function powerMapField(
   gy: number,
   cache: ImpedanceCache,
 ): FieldMap {
-  const m = Math.max(64, Math.min(512, 8 * grid.nx));
-  const n = Math.max(64, Math.min(512, 8 * grid.ny));
+  const m = Math.max(64, Math.min(256, 4 * grid.nx));
+  const n = Math.max(64, Math.min(256, 4 * grid.ny));
   const modal = cache.table(channel, m, n);
   const table = modal.w;
   const stride = modal.n;
