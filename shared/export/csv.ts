@@ -21,12 +21,19 @@ export function toCsv(rows: Cell[][]): string {
   return Papa.unparse(clean, { newline: '\r\n', escapeFormulae: true }) + '\r\n';
 }
 
+/** Separators a CSV may use: comma, else semicolon or tab (spreadsheets in some locales), taken from the first content line. */
+export function csvDelimiter(firstLine: string): string {
+  return firstLine.includes(',') ? ',' : ([';', '\t'].find((d) => firstLine.includes(d)) ?? ',');
+}
+
 /** Split CSV text into physical lines with their 1-based line numbers, skipping blank lines and `#` comments. */
 export function csvLines(text: string): { line: number; cells: string[] }[] {
   const out: { line: number; cells: string[] }[] = [];
-  text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/).forEach((raw, i) => {
+  const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
+  const delimiter = csvDelimiter(lines.find((l) => l.trim() && !l.trimStart().startsWith('#')) ?? '');
+  lines.forEach((raw, i) => {
     if (!raw.trim() || raw.trimStart().startsWith('#')) return;
-    const parsed = Papa.parse<string[]>(raw, { header: false });
+    const parsed = Papa.parse<string[]>(raw, { header: false, delimiter });
     out.push({ line: i + 1, cells: (parsed.data[0] ?? []).map((c) => c.trim()) });
   });
   return out;

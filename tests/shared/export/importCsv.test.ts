@@ -70,6 +70,11 @@ describe('power-map CSV', () => {
     expect(readPowerMapCsv(powerMapToCsv(r.map!)).map).toEqual(r.map);
   });
 
+  it('accepts semicolon- or tab-separated grids (spreadsheet exports in some locales)', () => {
+    expect(readPowerMapCsv('1;2\n3;4').map).toEqual({ nx: 2, ny: 2, weights: [3, 4, 1, 2] });
+    expect(readPowerMapCsv('1\t2\n3\t4').map).toEqual({ nx: 2, ny: 2, weights: [3, 4, 1, 2] });
+  });
+
   it('reports ragged rows, non-numbers, negatives and all-zero grids by line', () => {
     const r = readPowerMapCsv('1,2\n3\nx,-1');
     expect(r.map).toBeNull();
