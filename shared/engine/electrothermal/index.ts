@@ -5,3 +5,4 @@ export { loopGain, isLoopStable, type LoopGain } from './loopGain';
 export { evaluatePower, nominalPower, POWER_LAW_DEFAULTS, type NodePowerLaw, type PowerSplit } from './powerLaw';
 export { solveCoupled, COUPLED_DEFAULTS, type CoupledProblem, type CoupledSettings, type CoupledSolve } from './solveCoupled';
 export { validateCoupledProblem, KAPPA_WARNING_ABOVE } from './validateCoupling';
+export { analyseModelCoupling, coupledProblemFromModel } from './fromModel';
