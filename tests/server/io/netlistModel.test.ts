@@ -2,6 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { lx9Model } from '@shared/demo/lx9';
 import { solveAssembly } from '@shared/engine/assembly/solve';
+import { networkStep } from '@shared/engine/transient';
 import { spiceStems, writeNetlist } from '@shared/export';
 import type { Model } from '@shared/schemas/model';
 import { netlistModel } from '../../../server/api/io/netlistModel';
@@ -34,6 +35,23 @@ describe('netlist model', () => {
       const i = cm.nodes.findIndex((n) => n.partId === p.id && n.tier === 0);
       // Σ_k R_k equals the symmetrised steady entry, so agreement is to rounding (1e-9 relative).
       expectClose(sol.v.get(`t_${stems[i]}`)!, p.junction, 1e-9, 1e-9, p.id);
+    });
+  });
+
+  it('after a power step, the netlist follows its Foster network (backward Euler, h = 0.1 ms, to 1 % of the rise at 20 ms)', () => {
+    const model = smallDemo();
+    const result = solveAssembly(model, 'boost', { mapSize: 16 });
+    const cm = netlistModel(model, result, 'auto');
+    const elements = readNetlist(writeNetlist(cm, { source: {} }));
+    let state = solveMna(elements.map((e) => (e.kind === 'I' ? { ...e, value: 0 } : e)));
+    const h = 1e-4;
+    const steps = 200;
+    for (let k = 0; k < steps; k++) state = solveMna(elements, { h, previous: state });
+    const Z = networkStep(cm.foster!, h * steps);
+    const stems = spiceStems(cm.nodes.map((n) => n.label));
+    cm.nodes.forEach((n, i) => {
+      const rise = Z[i].reduce((s, z, j) => s + z * cm.powers[j], 0);
+      expectClose(state.v.get(`t_${stems[i]}`)! - cm.offsets[i], rise, 1e-2, 1e-3, `${n.label} rise at 20 ms`);
     });
   });
 
