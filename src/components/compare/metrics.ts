@@ -30,6 +30,9 @@ export interface TimeToLimit {
   part: string;
 }
 
+/** Time-to-limit of one variant: a figure, 'pending' while the transient runs, or an error text. */
+export type TimeState = TimeToLimit | 'pending' | { error: string };
+
 const none: MetricCell = { value: null, text: '—' };
 const argMax = <T>(xs: T[], f: (x: T) => number): T | undefined => xs.reduce<T | undefined>((b, x) => (b === undefined || f(x) > f(b) ? x : b), undefined);
 
@@ -63,14 +66,16 @@ function largestCoupling(r: AssemblyResult): MetricCell {
   return b ? { value: b.v, text: kelvin(b.v), detail: `${r.parts[b.j].name} → ${r.parts[b.i].name}` } : none;
 }
 
-function timeCell(t: TimeToLimit | null | undefined): MetricCell {
+function timeCell(t: TimeState | null | undefined): MetricCell {
   if (!t) return none;
-  if (t.time === null) return { value: Infinity, text: 'never', detail: t.part };
+  if (t === 'pending') return { value: null, text: 'computing…' };
+  if ('error' in t) return { value: null, text: '—', detail: t.error };
+  if (t.time === null) return { value: Infinity, text: 'no limit reached', detail: t.part || 'steady state stays within every limit' };
   return { value: t.time, text: t.time < 1 ? `${(t.time * 1000).toFixed(0)} ms` : `${t.time.toFixed(2)} s`, detail: t.part };
 }
 
-/** Build the rows for results in column order (null = not solved yet); `times` from the transient when available. */
-export function compareMetrics(results: (AssemblyResult | null)[], times?: (TimeToLimit | null)[]): MetricRow[] {
+/** Build the rows for results in column order (null = not solved yet); `times` from the transient when available, `timeHint` says how. */
+export function compareMetrics(results: (AssemblyResult | null)[], times?: (TimeState | null)[], timeHint?: string): MetricRow[] {
   const col = (f: (r: AssemblyResult) => MetricCell) => results.map((r) => (r ? f(r) : none));
   const rows: MetricRow[] = [
     { key: 'hottest', label: 'Hottest part', unit: 'K', better: 'lower', cells: col(hottestPart) },
@@ -80,7 +85,7 @@ export function compareMetrics(results: (AssemblyResult | null)[], times?: (Time
     { key: 'coupling', label: 'Largest coupling term', unit: 'K', better: 'lower', cells: col(largestCoupling), hint: 'rise one part causes in another' },
     {
       key: 'time', label: 'Time to limit at boost', unit: 's', better: 'higher', cells: results.map((_, i) => timeCell(times?.[i])),
-      hint: times ? 'from the transient of the chosen scenario' : 'needs the transient (not available here yet)',
+      hint: times ? (timeHint ?? 'transient, all parts at the scenario powers') : 'needs the transient (not available here yet)',
     },
     { key: 'power', label: 'Total power', unit: 'W', better: 'lower', cells: col((r) => ({ value: r.energyBalance.power, text: watts(r.energyBalance.power) })) },
     {
@@ -101,7 +106,7 @@ export function bestColumns(row: MetricRow, tolerance = 1e-6): number[] {
   if (vals.length < 2) return [];
   const sign = row.better === 'lower' ? 1 : -1;
   const best = Math.min(...vals.map((x) => sign * x.v));
-  const close = (a: number, b: number) => a === b || Math.abs(a - b) <= tolerance * Math.max(1, Math.abs(b));
+  const close = (a: number, b: number) => a === b || (Number.isFinite(a) && Number.isFinite(b) && Math.abs(a - b) <= tolerance * Math.max(1, Math.abs(b)));
   const winners = vals.filter((x) => close(sign * x.v, best)).map((x) => x.i);
   return winners.length === vals.length ? [] : winners;
 }
