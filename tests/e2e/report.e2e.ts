@@ -37,6 +37,8 @@ test('a reviewer opens the report of demo variant A (compared with B) and prints
 
   await page.emulateMedia({ media: 'print' });
   await expect(page.locator('.rp-toolbar').isVisible()).resolves.toBe(false);
+  await expect(page.locator('header.bar').isVisible()).resolves.toBe(false);
+  await shot(page, 'report-print');
   mkdirSync(screenshotDir, { recursive: true });
   const pdf = join(screenshotDir, 'report.pdf');
   await page.pdf({ path: pdf, format: 'A4', printBackground: true });
