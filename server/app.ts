@@ -61,6 +61,10 @@ export async function createApp(config: Config): Promise<BuiltApp> {
   app.disable('x-powered-by');
   app.use(helmet({ contentSecurityPolicy: { useDefaults: false, directives: cspDirectives(config.cookieSecure) } }));
   app.use('/api', requestLog(logger));
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
   app.use('/api', express.json({ limit: '2mb' }));
   app.use(
     '/api',

@@ -73,6 +73,7 @@ describe('security headers', () => {
       expect(csp).not.toMatch(/https?:\/\//);
       expect(res.headers['x-powered-by']).toBeUndefined();
       expect(res.headers['x-content-type-options']).toBe('nosniff');
+      expect(res.headers['cache-control']).toBe('no-store');
     } finally {
       await built.close();
       fs.rmSync(dataDir, { recursive: true, force: true });
