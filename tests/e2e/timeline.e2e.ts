@@ -8,6 +8,7 @@ let close: () => Promise<void>;
 
 beforeAll(async () => {
   ({ page, close } = await openBrowser());
+  page.setDefaultTimeout(60000);
 });
 afterAll(async () => close?.());
 
@@ -40,6 +41,17 @@ test('the engineer runs the boost pulse profile and reads the timing answers', a
   await shot(page, 'timeline-light');
 });
 
+test('the electro-thermal panel states the operating point and its margins', async () => {
+  await page.locator('.n-tabs-tab', { hasText: 'Electro-thermal' }).click();
+  await page.locator('[data-test="coupling-summary"]').waitFor({ timeout: 60000 });
+  const summary = await page.locator('[data-test="coupling-summary"]').textContent();
+  console.log(`electro-thermal: ${summary}`);
+  expect(summary).toMatch(/^(Stable operating point|Thermal runaway)/);
+  await expect(page.locator('[data-test="margin-power"]').textContent()).resolves.toMatch(/×/);
+  await shot(page, 'electrothermal-light');
+  await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
+});
+
 test('the timeline reads well in the dark theme', async () => {
   await page.evaluate(() => localStorage.setItem('heatloom.theme', 'dark'));
   await page.reload();
@@ -47,4 +59,7 @@ test('the timeline reads well in the dark theme', async () => {
   await page.locator('[data-test="fit-note"]').waitFor({ timeout: 120000 });
   await page.locator('[data-test="timing-boost"]').waitFor({ timeout: 30000 });
   await shot(page, 'timeline-dark');
+  await page.locator('.n-tabs-tab', { hasText: 'Electro-thermal' }).click();
+  await page.locator('[data-test="coupling-summary"]').waitFor({ timeout: 60000 });
+  await shot(page, 'electrothermal-dark');
 });

@@ -15,7 +15,7 @@ export interface ImpedancePair {
 
 /** Self pairs: every die source with its own node. */
 export function selfPairs(nodes: readonly TimelineNode[], sources: readonly TimelineSource[]): ImpedancePair[] {
-  return sources.flatMap((s, i) => (s.kind === 'junction' ? [{ node: s.node, source: i, label: `Z ${nodes[s.node].partName}`, memory: nodes[s.node].kind === 'memory' }] : []));
+  return sources.flatMap((s, i) => (s.kind === 'junction' ? [{ node: s.node, source: i, label: nodes[s.node].partName, memory: nodes[s.node].kind === 'memory' }] : []));
 }
 
 /** Transfer pairs: from source i to every die node (its own first). */
