@@ -9,7 +9,7 @@ import { createLogger, type Logger } from './lib/logger';
 import { errorMiddleware, apiNotFound } from './lib/errorMiddleware';
 import type { AppContext } from './lib/context';
 import { createMailer } from './lib/mailer';
-import { startFakeSmtp, type FakeSmtp } from './lib/fakeSmtp';
+import { startFakeSmtpOrFallback, type FakeSmtp } from './lib/fakeSmtp';
 import { openSessionStore } from './lib/sessionStore';
 import { resolveSessionSecret } from './lib/sessionSecret';
 import { cspDirectives } from './lib/csp';
@@ -47,7 +47,7 @@ export async function createApp(config: Config): Promise<BuiltApp> {
   if (applied.length) logger.info(`Applied migrations: ${applied.join(', ')}`);
 
   let fake: FakeSmtp | null = null;
-  if (!config.smtp) fake = await startFakeSmtp(config.smtpFakePort, storeReceivedMail, logger);
+  if (!config.smtp) fake = await startFakeSmtpOrFallback(config.smtpFakePort, storeReceivedMail, logger);
   const mailer = createMailer(config, logger, fake?.port ?? null);
   const seeded = config.seedDemo ? await seedDemoIfEmpty(config.argon2) : false;
   if (seeded) logger.info('Seeded the demo workspace "Larkspur Compute (demo)".');

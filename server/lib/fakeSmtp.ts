@@ -26,6 +26,17 @@ export interface FakeSmtp {
 const addresses = (a: AddressObject | AddressObject[] | undefined): string =>
   (Array.isArray(a) ? a : a ? [a] : []).map((x) => x.text).join(', ');
 
+/** Start the fake on `port`, or on any free port (with a warning) when that one is taken. */
+export async function startFakeSmtpOrFallback(port: number, store: (mail: ReceivedMail) => Promise<void>, logger: Logger): Promise<FakeSmtp> {
+  try {
+    return await startFakeSmtp(port, store, logger);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== 'EADDRINUSE' || port === 0) throw err;
+    logger.warn(`SMTP_FAKE_PORT ${port} is in use; the local SMTP server takes a free port instead.`);
+    return startFakeSmtp(0, store, logger);
+  }
+}
+
 /** Start the fake on 127.0.0.1:`port` (0 = any free port); `store` runs before the message is acknowledged. */
 export async function startFakeSmtp(port: number, store: (mail: ReceivedMail) => Promise<void>, logger: Logger): Promise<FakeSmtp> {
   const server = new SMTPServer({
