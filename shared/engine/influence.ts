@@ -6,6 +6,7 @@
  * term: R ≈ R_M + (R_M − R_M/2)/(r − 1), r = M·N/(M/2·N/2) (Richardson, Phil. Trans. A 210, 1911).
  * The table may be larger than the truncation used: rows have stride `table.n`.
  */
+import { axisClasses } from './spectrumClasses';
 
 /** A weighted modal table W (see impedance.ts) with its own size. */
 export interface ModalTable {
@@ -36,36 +37,6 @@ export function richardson(m: number, n: number): { hm: number; hn: number; fact
 
 /** Class pairs summed together per pass over a row of W. */
 const BLOCK = 8;
-
-/** Group identical spectrum rows (sources sharing centre and size along one axis). */
-function axisClasses(f: Float64Array, count: number, modes: number): { classOf: Int32Array; reps: number[] } {
-  const classOf = new Int32Array(count);
-  const reps: number[] = [];
-  const byKey = new Map<string, number[]>();
-  for (let i = 0; i < count; i++) {
-    const base = i * modes;
-    const key = `${f[base + Math.min(1, modes - 1)]}|${f[base + Math.min(2, modes - 1)]}|${f[base + Math.min(5, modes - 1)]}`;
-    const bucket = byKey.get(key) ?? [];
-    let found = -1;
-    for (const c of bucket) {
-      const rb = reps[c] * modes;
-      let same = true;
-      for (let m = 0; m < modes && same; m++) same = f[rb + m] === f[base + m];
-      if (same) {
-        found = c;
-        break;
-      }
-    }
-    if (found < 0) {
-      found = reps.length;
-      reps.push(i);
-      bucket.push(found);
-      byKey.set(key, bucket);
-    }
-    classOf[i] = found;
-  }
-  return { classOf, reps };
-}
 
 /**
  * Sum the pairs (i, j) listed in `pairs` (flat [i0, j0, i1, j1, …]) and, in the same pass, their half-level
@@ -117,12 +88,22 @@ function pairSums(table: ModalTable, sp: Spectra, pairs: Int32Array, mode: SumMo
         const row = p * stride;
         for (let b = 0; b < kb; b++) {
           const pb = b * nn;
-          let acc = 0;
+          // Two accumulators halve the dependency chain of the dot product.
+          let a0 = 0;
+          let a1 = 0;
           let q = 0;
-          for (; q < hn; q++) acc += w[row + q] * prod[pb + q];
-          tHalf[(k0 + b) * mm + p] = acc;
-          for (; q < nn; q++) acc += w[row + q] * prod[pb + q];
-          tFull[(k0 + b) * mm + p] = acc;
+          for (; q + 1 < hn; q += 2) {
+            a0 += w[row + q] * prod[pb + q];
+            a1 += w[row + q + 1] * prod[pb + q + 1];
+          }
+          if (q < hn) a0 += w[row + q] * prod[pb + q++];
+          tHalf[(k0 + b) * mm + p] = a0 + a1;
+          for (; q + 1 < nn; q += 2) {
+            a0 += w[row + q] * prod[pb + q];
+            a1 += w[row + q + 1] * prod[pb + q + 1];
+          }
+          if (q < nn) a0 += w[row + q] * prod[pb + q];
+          tFull[(k0 + b) * mm + p] = a0 + a1;
         }
       }
     }
