@@ -15,8 +15,9 @@ export const useVariantStore = defineStore('variant', () => {
   /** The working copy of the model (replace it through `edit`, never mutate in place). */
   const model = shallowRef<Model | null>(null);
   const savedJson = ref('');
-  const undoStack = ref<Model[]>([]);
-  const redoStack = ref<Model[]>([]);
+  // shallow: a deep ref would hand back reactive proxies on undo, which structuredClone cannot copy
+  const undoStack = shallowRef<Model[]>([]);
+  const redoStack = shallowRef<Model[]>([]);
   const selection = ref<string[]>([]);
   const scenarioId = ref<string>('');
   const loading = ref(false);

@@ -43,6 +43,7 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
   await signIn(page, 'engineer');
   await openFirstVariant(page);
   variantUrl = page.url();
+  page.on('pageerror', (e) => console.log('page error:', e.message));
   const vid = Number(variantUrl.split('/').pop());
   const model = (await page.evaluate(async (id) => (await fetch(`/api/variants/${id}`)).json(), vid)).model as Model;
   const move = besideMove(model);
@@ -74,6 +75,26 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
 
   await page.keyboard.press('Control+z');
   await expect(page.locator('[data-test="rule-overlap"]').count()).resolves.toBe(0);
+  const xb = await mmOf(memory);
+  await page.keyboard.press('ArrowRight');
+  await page.keyboard.press('Shift+ArrowRight');
+  expect(Math.abs((await mmOf(memory)) - xb - 1.1), 'nudged 0.1 mm (snap step) + 1 mm (Shift)').toBeLessThan(1e-6);
+  await page.keyboard.press('Control+z');
+  await page.keyboard.press('Control+z');
+  await expect(mmOf(memory)).resolves.toBe(xb);
+
+  const before = await page.locator('[data-test^="part-"]').count();
+  const box = (await page.locator('[data-test="layout-canvas"]').boundingBox())!;
+  const from = await centre(page.locator('[data-test="palette-passive"]'));
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width * 0.3, box.y + box.height * 0.8, { steps: 8 });
+  await page.locator('[data-test="drop-ghost"]').waitFor();
+  await page.mouse.up();
+  await expect(page.locator('[data-test^="part-"]').count()).resolves.toBe(before + 1);
+  await shot(page, 'layout-engineer-dropped');
+  await page.keyboard.press('Control+z');
+  await expect(page.locator('[data-test^="part-"]').count()).resolves.toBe(before);
   await page.locator('[data-test="save"]').click();
   await page.locator('[data-test="version"]').filter({ hasText: 'v2' }).waitFor();
 });

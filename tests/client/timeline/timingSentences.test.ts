@@ -47,12 +47,23 @@ describe('timingRequest', () => {
   const inputs = defaultTimingInputs(model, 'boost', 0, 'idle');
 
   test('boost at the chosen power over the scenario, rest over the start scenario (demo data)', () => {
-    const built = timingRequest(model, 'boost', { ...inputs, boostPower: 160 });
+    const built = timingRequest(model, 'boost', { ...inputs, boostPower: 160, withLeakage: false });
     if (!built.ok) throw new Error(built.message);
     expect(built.request.boostPower.slice(0, 3)).toEqual([160, 145, 20]);
     expect(built.request.restPower.slice(0, 3)).toEqual([35, 35, 8]);
     expect(built.request.startLabel).toBe('from idle');
     expectClose(built.request.period!, 0.1, 1e-12, 0, '100 ms in s');
+  });
+
+  test('leakage and Joule heat at the limit are added to the compute dies (demo electrical data)', () => {
+    const built = timingRequest(model, 'boost', { ...inputs, boostPower: 160, withLeakage: true });
+    if (!built.ok) throw new Error(built.message);
+    // P_leak = 10·e^{0.03·(105 − 85)} W; Joule = (200 A)²·5e-5 Ω·(1 + 0.00393·(105 − 20)) (physics.md §4 power law, demo values).
+    const extra = 10 * Math.exp(0.03 * 20) + 200 ** 2 * 5e-5 * (1 + 0.00393 * 85);
+    expectClose(built.request.boostPower[0], 160 + extra, 1e-12, 0, 'boost with leakage');
+    const idleJoule = 45 ** 2 * 5e-5 * (1 + 0.00393 * 85);
+    expectClose(built.request.restPower[0], 35 + 10 * Math.exp(0.03 * 20) + idleJoule, 1e-12, 0, 'rest with leakage (idle current 45 A)');
+    expect(built.request.boostPower[2]).toBe(20);
   });
 
   test('inputs that cannot work are named', () => {
