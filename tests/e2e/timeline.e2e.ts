@@ -52,10 +52,16 @@ test('the electro-thermal panel states the operating point and its margins', asy
   await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
 });
 
-test('the timeline reads well in the dark theme', async () => {
+test('the impedance shows progress, can be cancelled and recomputed; dark theme', async () => {
   await page.evaluate(() => localStorage.setItem('heatloom.theme', 'dark'));
   await page.reload();
   await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
+  await page.locator('[data-test="impedance-progress"]').waitFor();
+  await shot(page, 'timeline-progress-dark');
+  await page.locator('[data-test="impedance-cancel"]').click();
+  await page.locator('[data-test="impedance-compute"]').waitFor();
+  await expect(page.locator('[data-test="impedance-progress"]').count()).resolves.toBe(0);
+  await page.locator('[data-test="impedance-compute"]').click();
   await page.locator('[data-test="fit-note"]').waitFor({ timeout: 120000 });
   await page.locator('[data-test="timing-boost"]').waitFor({ timeout: 30000 });
   await shot(page, 'timeline-dark');

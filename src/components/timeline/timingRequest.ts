@@ -2,9 +2,13 @@
  * Timing-answer inputs → the engine's request (transient/timingAnswers.ts). The chosen part runs at the
  * boost power with the other parts at the selected scenario's powers; while resting it drops to the rest
  * power with the others at the start scenario's powers; the start state is that scenario's steady state.
+ * Optionally every part's leakage and Joule heat are added as evaluated at its own limit temperature: a
+ * fixed-power bound that is conservative while the part stays below its limit (physics.md §4 power law).
  */
 import type { Model } from '@shared/schemas/model';
 import type { TimingRequest } from '@shared/engine/transient';
+import { evaluatePower } from '@shared/engine/electrothermal/powerLaw';
+import { nodePowerLaws } from '@/components/electrothermal/problem';
 import { scenarioNodePowers, timelineNodes, timelineSources, toSourcePowers } from './nodes';
 
 /** What the user types (powers W, temperatures °C, period ms). */
@@ -17,6 +21,8 @@ export interface TimingInputs {
   periodMs: number | null;
   /** 'ambient' or a scenario id. */
   startFrom: string;
+  /** Add leakage and Joule heat at each part's limit temperature. */
+  withLeakage: boolean;
 }
 
 /** A request, or the first problem with the inputs in words. */
@@ -42,6 +48,14 @@ export function timingRequest(model: Model, scenarioId: string, inputs: TimingIn
   const off = [...base];
   on[own] = boostPower;
   off[own] = restPower;
+  if (inputs.withLeakage) {
+    const extra = (id: string | undefined) => {
+      const laws = nodePowerLaws(model, model.scenarios.find((s) => s.id === id));
+      return sources.map((s) => (s.kind === 'junction' ? evaluatePower({ ...laws[s.node], dynamic: 0 }, s.node === node.index ? limit : nodes[s.node].limit).total : 0));
+    };
+    extra(scenario?.id).forEach((p, i) => (on[i] += p));
+    if (start) extra(start.id).forEach((p, i) => (off[i] += p));
+  }
   const limits = nodes.map((n) => n.limit);
   limits[node.index] = limit;
   return {
@@ -73,5 +87,6 @@ export function defaultTimingInputs(model: Model, scenarioId: string, node: numb
     reenable: (n?.limit ?? 105) - 10,
     periodMs: 100,
     startFrom,
+    withLeakage: true,
   };
 }
