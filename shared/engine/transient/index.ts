@@ -28,3 +28,14 @@ export { assemblyImpedance, impedanceTimes, nodeLabel, validateTimes, IMPEDANCE_
 export { assemblySources, type ImpedanceSource } from './impedanceSources';
 export { impedanceChecks, type ImpedanceChecks } from './impedanceChecks';
 export { channelImpedance, requireHeatCapacity, solveChannelTransient, type ChannelImpedance } from './channelImpedance';
+export {
+  modelTimingAnswers,
+  prepareModelTransient,
+  scenarioSchedule,
+  scenarioSourcePowers,
+  scenarioTimeline,
+  sourceLaws,
+  type ModelTransient,
+  type PartTimingRequest,
+  type TimelineOptions,
+} from './modelTransient';
