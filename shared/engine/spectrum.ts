@@ -26,11 +26,3 @@ export function axisSpectra(sources: readonly RectSource[], length: number, coun
   }
   return out;
 }
-
-/** Spectra of points (the mean over a zero-size rectangle): cos(λ_m x). */
-export function pointSpectrum(coordinate: number, length: number, count: number): Float64Array {
-  const out = new Float64Array(count);
-  const step = Math.PI / length;
-  for (let m = 0; m < count; m++) out[m] = Math.cos(m * step * coordinate);
-  return out;
-}
