@@ -3,12 +3,15 @@ import { afterAll, beforeAll, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, shot, signIn } from './browser';
 
+/** The compare screen solves every variant and its transient in the browser: allow for a busy machine. */
+const SLOW = 240_000;
+
 let page: Page;
 let close: () => Promise<void>;
 
 beforeAll(async () => {
   ({ page, close } = await openBrowser());
-});
+}, SLOW);
 afterAll(async () => close?.());
 
 const DEMO = ['A — memory flanking compute', 'B — memory on one side', 'C — wider gaps'];
@@ -17,6 +20,7 @@ test('an engineer ticks A, B and C of the demo and compares them', async () => {
   await signIn(page, 'engineer');
   await page.locator('[data-test="project-link"]').first().click();
   await page.locator('[data-test="assembly-link"]').first().click();
+  await page.waitForURL(/\/assemblies\/\d+$/);
   for (const name of DEMO) {
     const row = page.locator('tbody tr').filter({ has: page.getByText(name, { exact: true }) });
     await row.locator('.n-checkbox').click();
@@ -35,7 +39,7 @@ test('an engineer ticks A, B and C of the demo and compares them', async () => {
   // same interposer in all three: two difference maps against the baseline A
   await expect(page.locator('[data-test="difference-maps"] svg.heat').count()).resolves.toBe(2);
   await shot(page, 'compare-abc');
-});
+}, SLOW);
 
 test('changing the baseline moves the difference columns', async () => {
   await page.locator('[data-test="compare-baseline"]').click();
@@ -43,4 +47,4 @@ test('changing the baseline moves the difference columns', async () => {
   await expect(page.locator('[data-test="difference-maps"] h2').textContent()).resolves.toContain(DEMO[1]);
   const deltas = await page.locator('[data-test="row-hottest"] td').evaluateAll((tds) => tds.map((td) => !!td.querySelector('.delta')));
   expect(deltas).toEqual([true, false, true]);
-});
+}, SLOW);

@@ -3,6 +3,9 @@ import { afterAll, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { baseUrl, openBrowser, shot, signIn } from './browser';
 
+/** The compare screen solves every variant and its transient in the browser: allow for a busy machine. */
+const SLOW = 240_000;
+
 const closers: (() => Promise<void>)[] = [];
 afterAll(async () => { for (const c of closers) await c(); });
 
@@ -27,6 +30,7 @@ test('the engineer branches B and asks for review of the branch', async () => {
   const page = await browserAs('engineer');
   await page.locator('[data-test="project-link"]').first().click();
   await page.locator('[data-test="assembly-link"]').first().click();
+  await page.waitForURL(/\/assemblies\/\d+$/);
   const aid = Number(/assemblies\/(\d+)/.exec(page.url())![1]);
   const idOf = async (name: RegExp) => Number(/variants\/(\d+)/.exec((await page.locator('[data-test="variant-link"]', { hasText: name }).getAttribute('href'))!)![1]);
   const aId = await idOf(/^A — memory flanking compute$/);
@@ -48,7 +52,7 @@ test('the engineer branches B and asks for review of the branch', async () => {
   await page.locator('[data-test="move-message"] textarea').fill('Memory on one side, branched for the review round.');
   await page.locator('[data-test="move-confirm"]').click();
   await page.locator('[data-test="review-status-tag"]', { hasText: 'In review' }).waitFor();
-});
+}, SLOW);
 
 test('the reviewer comments on a part and approves; no editing controls', async () => {
   const page = await browserAs('reviewer');
@@ -64,7 +68,7 @@ test('the reviewer comments on a part and approves; no editing controls', async 
   await page.locator('[data-test="move-confirm"]').click();
   await page.locator('[data-test="review-status-tag"]', { hasText: 'Approved' }).waitFor();
   await shot(page, 'review-approved');
-});
+}, SLOW);
 
 test("the owner's outbox holds the request and the decision", async () => {
   const page = await browserAs('owner');
@@ -80,4 +84,4 @@ test("the owner's outbox holds the request and the decision", async () => {
   expect(all).toContain(`Review requested: ${branchName}`);
   expect(all).toContain(`Review decided: ${branchName} — approved`);
   await shot(page, 'review-outbox');
-});
+}, SLOW);
