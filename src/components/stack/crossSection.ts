@@ -1,6 +1,6 @@
 /**
- * Geometry of the to-scale cross-section: a cut along x through the selected part (or the interposer
- * centre). Lateral sizes are to scale; thicknesses are to scale vertically (a separate scale, stated
+ * Geometry of the to-scale cross-section: a cut along x through the selected part (or through
+ * the most parts). Lateral sizes are to scale; thicknesses are to scale vertically (a separate scale, stated
  * in the drawing) except that very thin layers get a minimum visible height, labelled with their
  * true thickness. Lists are drawn in model order, index 0 on top (lid side), as in the table.
  */
@@ -37,8 +37,10 @@ function column(p: Part): Slice[] {
 export function crossSection(model: Model, selection: string[]) {
   const { interposer: ip, substrate: sub, lid, c4 } = model.stack;
   const focus = model.parts.find((p) => selection.includes(p.id)) ?? null;
-  const yCut = focus?.y ?? ip.height / 2;
-  const cut = model.parts.filter((p) => { const r = partRect(p); return r.y0 <= yCut && yCut <= r.y1; });
+  const crossing = (y: number) => model.parts.filter((p) => { const r = partRect(p); return r.y0 <= y && y <= r.y1; });
+  const busiest = [...model.parts].sort((a, b) => crossing(b.y).length - crossing(a.y).length)[0];
+  const yCut = focus?.y ?? busiest?.y ?? ip.height / 2;
+  const cut = crossing(yCut);
   const rep = focus ?? cut[0] ?? null;
   const span = Math.max(sub.width, lid.width, ip.width);
   const sx = SECTION.drawWidth / span;
