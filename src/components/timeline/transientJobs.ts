@@ -9,7 +9,7 @@ import type { ImpedanceCache } from '@shared/engine/cache';
 import { EngineInputError } from '@shared/engine/errors';
 import { analyseCoupling, solveCoupled, type CouplingResult, type NodePowerLaw } from '@shared/engine/electrothermal';
 import {
-  assemblyImpedance, fitFosterNetwork, prepareLaplaceAssembly, scheduleFromSegments, simulateProfile, timingAnswers,
+  prepareLaplaceAssembly, prepareModelTransient, scheduleFromSegments, simulateProfile, timingAnswers,
   type FosterNetwork, type LongRunHooks, type SimulationResult, type SimulationStart, type TimingAnswers,
 } from '@shared/engine/transient';
 import { coupledProblem, nodePowerLaws } from '@/components/electrothermal/problem';
@@ -19,18 +19,20 @@ import type { ImpedanceResult, SimulateParams, TimingParams } from './protocol';
 /** Impedance (rows = nodes, columns = part sources) from 1 µs to settling, with its Foster fit. */
 export function impedanceJob(model: Model, count: number, hooks: LongRunHooks = {}): ImpedanceResult {
   const laplace = prepareLaplaceAssembly(model);
-  const imp = assemblyImpedance(model, { ...hooks, count, laplace, sources: 'parts' });
+  const mt = prepareModelTransient(model, { ...hooks, count, laplace, sources: 'parts' });
+  const imp = mt.impedance;
   const sources = timelineSources(model);
   if (imp.sourceLabels.join() !== sources.map((s) => s.key).join()) throw new Error('The engine ordered the impedance sources differently than the Timeline expects.');
+  const { network, ...fit } = mt.fit;
+  // Readable row names for the sentences; a stack's tiers source reads its first tier (its law has no T-dependent part).
   const labels = timelineNodes(model).map((x) => x.label);
   const sourceNodes = sources.map((s) => s.node);
-  const { network, ...fit } = fitFosterNetwork({ times: imp.times, Z: imp.Z, steady: imp.steady, labels, sourceNodes, sourceLabels: imp.sourceLabels });
   const n = laplace.nodeCount;
   const nodeSteady = Array.from({ length: n }, (_, j) => Array.from(laplace.steady.R.subarray(j * n, (j + 1) * n)));
   const method = `Stehfest inversion at ${imp.times.length} times (${imp.evaluations} Laplace evaluations)`;
   return {
     times: imp.times, Z: imp.Z, steady: imp.steady, nodeSteady, baseTemperatures: Array.from(laplace.steady.offsets),
-    sourceKeys: imp.sourceLabels, settleTime: imp.settleTime, checks: imp.checks, fit, network: { ...network, sourceNodes }, method,
+    sourceKeys: imp.sourceLabels, settleTime: imp.settleTime, checks: imp.checks, fit, network: { ...network, labels, sourceNodes }, method,
   };
 }
 
