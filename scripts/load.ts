@@ -63,8 +63,8 @@ async function main(): Promise<void> {
         body: (k) => JSON.stringify({ scenarioId: scenario(k) }),
       });
       const idx = Array.from({ length: level }, (_, i) => i);
-      rows.push(await runPhase(server.url, 'solve, cached (stored result)', idx.map((i) => solveTarget(i, () => 'load-0', cached)), per));
-      const uncachedRun = runPhase(server.url, 'solve, uncached (new scenario)', idx.map((i) => solveTarget(i, (k) => `load-${k % LOAD_SCENARIOS}`, vids[i])), Math.min(per, LOAD_SCENARIOS));
+      rows.push(await runPhase(server.url, 'solve, cached (stored result)', idx.map((i) => solveTarget(i, () => 'load-0', cached)), per, server.cpuMs));
+      const uncachedRun = runPhase(server.url, 'solve, uncached (new scenario)', idx.map((i) => solveTarget(i, (k) => `load-${k % LOAD_SCENARIOS}`, vids[i])), Math.min(per, LOAD_SCENARIOS), server.cpuMs);
       probes.push(await probe(server.url, uncachedRun, `uncached solves, ${level} clients`));
       rows.push(await uncachedRun);
       const saveTargets: PhaseTarget[] = [];
@@ -81,7 +81,7 @@ async function main(): Promise<void> {
           },
         });
       }
-      rows.push(await runPhase(server.url, 'save (PUT variant, own variant per client)', saveTargets, per));
+      rows.push(await runPhase(server.url, 'save (PUT variant, own variant per client)', saveTargets, per, server.cpuMs));
       console.log(phaseTable(rows.slice(-3)));
     }
   } finally {
@@ -96,6 +96,7 @@ async function main(): Promise<void> {
       '"uncached": every request names a scenario of its variant not solved before (same geometry, scaled powers), so the engine runs on a worker thread and the result is stored.',
       'Saves: each client saves its own variant with the version it last got back, so no save conflicts (409) arise; conflicts are by design when two people save the same variant (see docs/reliability.md).',
       'errors = connection errors + timeouts + responses that are not 2xx.',
+      '"server CPU ms/req": CPU time (user + system, all threads) of the server process group during the phase divided by its requests, read from /proc — on a shared, overloaded machine it estimates what one request costs on an idle one.',
     ]);
     console.log('Written to docs/performance.md (Load section).');
   }

@@ -26,6 +26,8 @@ export interface PhaseFigures {
   p95: number;
   p99: number;
   errors: number;
+  /** Server CPU time (all threads) per request, ms: close to an idle machine's latency for one client. */
+  cpuPerRequest: number;
   statuses: Record<string, number>;
   seconds: number;
 }
@@ -36,7 +38,8 @@ function percentile(sorted: number[], p: number): number {
 }
 
 /** Run one phase against `url`; `targets[i]` drives connection i. */
-export async function runPhase(url: string, name: string, targets: PhaseTarget[], perClient: number): Promise<PhaseFigures> {
+export async function runPhase(url: string, name: string, targets: PhaseTarget[], perClient: number, cpuMs: () => number): Promise<PhaseFigures> {
+  const cpu0 = cpuMs();
   const latencies: number[] = [];
   const statuses: Record<string, number> = {};
   let next = 0;
@@ -51,8 +54,8 @@ export async function runPhase(url: string, name: string, targets: PhaseTarget[]
       counters.set(client, { k: 0, t });
       client.setRequests([{ method: t.method, path: t.path, headers: t.headers, body: t.body(0, 0) }]);
     },
-  });
-  instance.on('response', (client, status: number, _bytes: number, ms: number) => {
+  }) as unknown as autocannon.Instance & Promise<autocannon.Result>;
+  instance.on('response', (client: autocannon.Client, status: number, _bytes: number, ms: number) => {
     latencies.push(ms);
     statuses[status] = (statuses[status] ?? 0) + 1;
     const c = counters.get(client)!;
@@ -69,6 +72,7 @@ export async function runPhase(url: string, name: string, targets: PhaseTarget[]
     rps: latencies.length / result.duration,
     p50: percentile(latencies, 50), p95: percentile(latencies, 95), p99: percentile(latencies, 99),
     errors: result.errors + result.timeouts + (latencies.length - ok),
+    cpuPerRequest: (cpuMs() - cpu0) / Math.max(1, latencies.length),
     statuses, seconds: result.duration,
   };
 }

@@ -18,8 +18,8 @@ const ms = (x: number) => (Number.isFinite(x) ? x.toFixed(0) : '–');
 
 /** The Markdown table of the phases. */
 export function phaseTable(rows: PhaseFigures[]): string {
-  const head = '| phase | clients | requests | req/s | p50 ms | p95 ms | p99 ms | errors | statuses |\n|---|---:|---:|---:|---:|---:|---:|---:|---|';
-  const body = rows.map((r) => `| ${r.name} | ${r.clients} | ${r.requests} | ${r.rps.toFixed(1)} | ${ms(r.p50)} | ${ms(r.p95)} | ${ms(r.p99)} | ${r.errors} | ${Object.entries(r.statuses).map(([s, n]) => `${s}×${n}`).join(' ')} |`);
+  const head = '| phase | clients | requests | req/s | p50 ms | p95 ms | p99 ms | server CPU ms/req | errors | statuses |\n|---|---:|---:|---:|---:|---:|---:|---:|---:|---|';
+  const body = rows.map((r) => `| ${r.name} | ${r.clients} | ${r.requests} | ${r.rps.toFixed(1)} | ${ms(r.p50)} | ${ms(r.p95)} | ${ms(r.p99)} | ${r.cpuPerRequest.toFixed(1)} | ${r.errors} | ${Object.entries(r.statuses).map(([s, n]) => `${s}×${n}`).join(' ')} |`);
   return [head, ...body].join('\n');
 }
 

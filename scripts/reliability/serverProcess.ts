@@ -3,6 +3,7 @@
  * fault scripts; stop it gracefully (SIGTERM) or kill it hard (SIGKILL to its process group).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 
@@ -16,6 +17,24 @@ export interface ServerProcess {
   stop(): Promise<number | null>;
   /** SIGKILL the whole process group at once (a crash). */
   kill(): Promise<void>;
+  /** CPU time (user + system, ms) used so far by every process of the server's group, from /proc (Linux). */
+  cpuMs(): number;
+}
+
+/** Sum of utime + stime (ms) of the processes whose process group is `pgid` (fields 5, 14, 15 of /proc/PID/stat). */
+export function groupCpuMs(pgid: number): number {
+  const tick = 1000 / 100; // USER_HZ is 100 on Linux (man 5 proc)
+  let total = 0;
+  for (const pid of fs.readdirSync('/proc').filter((d) => /^\d+$/.test(d))) {
+    try {
+      const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+      const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      if (Number(f[2]) === pgid) total += (Number(f[11]) + Number(f[12])) * tick;
+    } catch {
+      // the process ended meanwhile
+    }
+  }
+  return total;
 }
 
 /** Options of startServer. */
@@ -73,6 +92,7 @@ export async function startServer(o: StartOptions): Promise<ServerProcess> {
   return {
     url, child,
     output: () => out,
+    cpuMs: () => groupCpuMs(child.pid!),
     stop: async () => {
       process.kill(child.pid!, 'SIGTERM');
       return exited;

@@ -20,7 +20,7 @@ const SEED = 8_2026;
 const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'heatloom-cli-fuzz-'));
 afterAll(() => fs.rmSync(tmp, { recursive: true, force: true }));
 
-const model = { format: 'heatloom-model', formatVersion: 1, units: 'SI', ...demoContent().variants[2].model };
+const model = demoContent().variants[2].model;
 const channel = {
   footprint: { x: 0.01, y: 0.01 },
   above: { layers: [{ thickness: 5e-4, k: 150 }], h: 5000 },
