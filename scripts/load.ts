@@ -84,6 +84,9 @@ async function main(): Promise<void> {
       rows.push(await runPhase(server.url, 'save (PUT variant, own variant per client)', saveTargets, per, server.cpuMs));
       console.log(phaseTable(rows.slice(-3)));
     }
+  } catch (err) {
+    console.error(`Server output (last 3000 characters):\n${server.output().slice(-3000)}`);
+    throw err;
   } finally {
     await server.stop();
     fs.rmSync(dataDir, { recursive: true, force: true });

@@ -6,7 +6,7 @@
 import autocannon from 'autocannon';
 
 /** Hard stop of a phase in seconds, whatever its request count. */
-export const PHASE_LIMIT_S = 180;
+export const PHASE_LIMIT_S = 90;
 
 /** What each connection sends: the path, and the body of its k-th request (k = 0, 1, …). */
 export interface PhaseTarget {

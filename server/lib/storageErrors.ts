@@ -1,5 +1,6 @@
 /**
- * Storage failures (disk full, read-only or vanished data folder) → a clear 507/503 instead of a
+ * Storage failures (disk full, read-only or vanished data folder, a lock held past the busy
+ * timeout) → a clear 507/503 instead of a
  * generic 500. SQLite rolls the transaction back, so nothing half-written stays behind
  * (https://www.sqlite.org/atomiccommit.html); the message tells the user the change was not saved.
  */
@@ -11,11 +12,12 @@ import type { Logger } from './logger';
 
 const FULL = new Set(['SQLITE_FULL', 'ENOSPC', 'EFBIG', 'EDQUOT']);
 const UNWRITABLE = new Set(['SQLITE_READONLY', 'SQLITE_CANTOPEN', 'SQLITE_IOERR', 'EROFS', 'EACCES', 'EPERM']);
+const BUSY = new Set(['SQLITE_BUSY', 'SQLITE_LOCKED']);
 
 /** The SQLite/POSIX code of an error or of the error it wraps (Sequelize keeps the driver's in `original`). */
 export function storageCode(err: unknown): string | null {
   for (let e = err as { code?: unknown; original?: unknown; parent?: unknown } | undefined, i = 0; e && i < 4; i++) {
-    if (typeof e.code === 'string' && (FULL.has(e.code) || UNWRITABLE.has(e.code))) return e.code;
+    if (typeof e.code === 'string' && (FULL.has(e.code) || UNWRITABLE.has(e.code) || BUSY.has(e.code))) return e.code;
     e = (e.original ?? e.parent) as typeof e;
   }
   return null;
@@ -25,6 +27,7 @@ export function storageCode(err: unknown): string | null {
 export function storageError(err: unknown): AppError | null {
   const code = storageCode(err);
   if (!code) return null;
+  if (BUSY.has(code)) return new AppError(503, 'storage_busy', 'The database stayed busy with other changes for too long: your change was not saved. Try again in a moment.');
   if (FULL.has(code)) return new AppError(507, 'storage_full', 'The server has run out of disk space: your change was not saved. Ask the administrator to free space, then try again.');
   return new AppError(503, 'storage_unavailable', 'The server cannot write to its data folder (read-only or unavailable): your change was not saved. Ask the administrator to check the data folder.');
 }
