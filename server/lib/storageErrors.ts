@@ -1,8 +1,7 @@
 /**
  * Storage failures (disk full, read-only or vanished data folder, a lock held past the busy
- * timeout) → a clear 507/503 instead of a
- * generic 500. SQLite rolls the transaction back, so nothing half-written stays behind
- * (https://www.sqlite.org/atomiccommit.html); the message tells the user the change was not saved.
+ * timeout) → a clear 507/503 instead of a generic 500. SQLite rolls the transaction back, so
+ * nothing half-written stays behind (https://www.sqlite.org/atomiccommit.html); the message tells the user the change was not saved.
  */
 import type { ErrorRequestHandler } from 'express';
 import fs from 'node:fs';
