@@ -47,11 +47,6 @@ function open(): Piscina {
   return pool;
 }
 
-/** Threads, queued and running tasks of the pool right now (zeros when it is not open). */
-export function poolStats(): { threads: number; queued: number; maxQueue: number } {
-  return { threads: pool?.threads.length ?? 0, queued: pool?.queueSize ?? 0, maxQueue: options.maxQueue };
-}
-
 /** Run `task` on a worker thread; resolves with the engine's result or throws a typed AppError / EngineInputError. */
 export async function runEngineTask<T>(task: EngineTask, opts: { signal?: AbortSignal } = {}): Promise<T> {
   let outcome: TaskOutcome;

@@ -92,9 +92,3 @@ export function cancelJob(userId: number, id: string): JobView {
   }
   return view(j);
 }
-
-/** Forget every job, cancelling the running ones (used when the app closes). */
-export function cancelAllJobs(): void {
-  for (const j of jobs.values()) j.abort.abort();
-  jobs.clear();
-}
