@@ -23,7 +23,7 @@ export interface SimulationOptions extends LongRunHooks {
   start?: SimulationStart;
   /** Samples per interval, log-spaced from 1/1000 of it to its end (default 1: interval ends only). */
   samplesPerInterval?: number;
-  /** Power laws per source for leakage/Joule feedback; the schedule gives their dynamic power. */
+  /** Power laws per source for leakage/Joule feedback; the schedule gives their dynamic power (and a steady start is then the coupled one). */
   feedback?: readonly NodePowerLaw[];
   /** Cap on the number of samples. */
   maxSteps?: number;
@@ -61,6 +61,26 @@ function outputsOf(net: PackedNetwork, power: ArrayLike<number>, out: Float64Arr
   return out;
 }
 
+/** Bound on the fixed-point sweeps of a coupled start state. */
+const START_SWEEPS = 200;
+
+/**
+ * Steady start state at the given dynamic powers; with feedback the coupled steady state, by plain
+ * fixed-point sweeps P ← P(T(P)) (they converge when the loop gain is below 1; bounded).
+ */
+function startState(net: PackedNetwork, dynamic: readonly number[], base: readonly number[], laws?: readonly NodePowerLaw[]): Float64Array {
+  if (!laws) return steadyState(net, dynamic);
+  let power = [...dynamic];
+  for (let sweep = 0; sweep < START_SWEEPS; sweep++) {
+    const T = stateTemperatures(net, steadyState(net, power), base);
+    const next = dynamic.map((d, i) => (laws[i] && net.sourceNodes[i] >= 0 ? evaluatePower({ ...laws[i], dynamic: d }, T[net.sourceNodes[i]]).total : d));
+    const change = Math.max(0, ...next.map((p, i) => Math.abs(p - power[i])));
+    power = next;
+    if (change <= 1e-9 * Math.max(1, ...power)) return steadyState(net, power);
+  }
+  throw new EngineInputError('start', 'The start scenario has no stable electro-thermal operating point (thermal runaway); start from ambient or lower its power.');
+}
+
 function sampleOffsets(length: number, count: number): number[] {
   if (count <= 1) return [length];
   return Array.from({ length: count }, (_, q) => length * 10 ** ((-3 * (count - 1 - q)) / (count - 1)));
@@ -86,8 +106,8 @@ export function simulateProfile(network: FosterNetwork, schedule: PowerSchedule,
   if (options.baseTemperatures.length !== rows) throw new EngineInputError('baseTemperatures', `Expected ${rows} base temperatures.`);
   if (schedule.power.some((row) => row.length !== n)) throw new EngineInputError('profile', `Every step needs ${n} source powers.`);
   const start = options.start ?? 'ambient';
-  const x = start === 'ambient' ? steadyState(net, []) : 'state' in start ? Float64Array.from(start.state) : steadyState(net, start.steadyPower);
   const laws = options.feedback;
+  const x = start === 'ambient' ? steadyState(net, []) : 'state' in start ? Float64Array.from(start.state) : startState(net, start.steadyPower, options.baseTemperatures, laws);
   const cap = options.temperatureCap ?? 1000;
   const total = intervals * perInterval + 1;
   const times = new Float64Array(total);

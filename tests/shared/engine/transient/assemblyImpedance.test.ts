@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { lx9Model } from '@shared/demo/lx9';
-import { assemblyImpedance, fitFosterNetwork, networkStep, prepareLaplaceAssembly } from '@shared/engine/transient';
+import { assemblyImpedance, fitFosterNetwork, networkStep, prepareLaplaceAssembly, TransientCancelledError } from '@shared/engine/transient';
 import { expectClose } from '../../../helpers/float';
 
 describe('assembly impedance of the demo model', () => {
@@ -26,6 +26,13 @@ describe('assembly impedance of the demo model', () => {
     expect(full.checks.steadyError).toBeLessThan(1e-6);
     const n = lap.nodeCount;
     full.sourceNodes.forEach((node, i) => node >= 0 && expectClose(full.steady[node][i], lap.steady.R[node * n + node], 1e-6, 0, `R self ${i}`));
+  });
+
+  it('reports progress and can be cancelled', () => {
+    const seen: number[] = [];
+    const call = () => assemblyImpedance(model, { laplace: lap, onProgress: (f) => seen.push(f), shouldCancel: () => seen.length > 3 });
+    expect(call).toThrow(TransientCancelledError);
+    expect(seen.every((f) => f >= 0 && f <= 1)).toBe(true);
   });
 
   it('is fitted by a Foster network with the steady limit exact', () => {

@@ -58,6 +58,14 @@ describe('profile simulation', () => {
     expect(sim.status).toBe('complete');
   });
 
+  it('with feedback a steady start is the coupled steady state (it does not drift)', () => {
+    const net: FosterNetwork = { tau: [1e-3, 0.05], R: [[[0.1, 0.4]]], labels: ['compute-0'] };
+    const law = { dynamic: 0, leakageAtRef: 10, kappa: 0.03, referenceTemperature: 85 };
+    const sim = simulateProfile(net, scheduleFromSegments([[{ kind: 'steady', power: 60, duration: 0.1 }]], [0]), { baseTemperatures: [40], start: { steadyPower: [60] }, feedback: [law], samplesPerInterval: 5 });
+    const ref = analyseCoupling({ R: [[0.5]], baseTemperatures: [40], laws: [{ ...law, dynamic: 60 }] }, { margins: false });
+    sim.temperatures[0].forEach((t) => expectClose(t, ref.temperatures[0], 1e-8, 0, 'coupled start'));
+  });
+
   it('stops and says so on a runaway with feedback', () => {
     const net: FosterNetwork = { tau: [0.05], R: [[[1]]], labels: ['compute-0'] };
     const law = { dynamic: 0, leakageAtRef: 40, kappa: 0.03, referenceTemperature: 85 };
