@@ -49,12 +49,17 @@ export function fosterStep(R: readonly number[], tau: readonly number[], t: numb
   return z;
 }
 
-/** The factorised design of signed fits on given times and τ grid, shared by many entries. */
-export function signedFosterDesign(times: readonly number[], tau: readonly number[], settings: Partial<FosterFitSettings> = {}): QrFactors {
+/** The step basis 1 − e^{−t_i/τ_k} on given times and τ grid with the factorised signed design, shared by many entries. */
+export interface FosterDesign {
+  basis: number[][];
+  qr: QrFactors;
+}
+
+/** Build the shared design of fits on given times and τ grid. */
+export function signedFosterDesign(times: readonly number[], tau: readonly number[], settings: Partial<FosterFitSettings> = {}): FosterDesign {
   const o = { ...FOSTER_FIT_DEFAULTS, ...settings };
-  const A = times.map((t) => tau.map((tk) => -Math.expm1(-t / tk)));
-  A.push(tau.map(() => o.steadyWeight));
-  return qrFactor(A, o.regularisation);
+  const basis = times.map((t) => tau.map((tk) => -Math.expm1(-t / tk)));
+  return { basis, qr: qrFactor([...basis, tau.map(() => o.steadyWeight)], o.regularisation) };
 }
 
 /** Fit Σ R_k(1 − e^{−t/τ_k}) to samples Z(times) with Σ R_k = steady; `design` reuses a signed factorisation. */
@@ -64,18 +69,19 @@ export function fitFoster(
   tau: readonly number[],
   steady: number,
   settings: Partial<FosterFitSettings> = {},
-  design?: QrFactors,
+  design?: FosterDesign,
 ): FosterFit {
   const o = { ...FOSTER_FIT_DEFAULTS, ...settings };
+  const d = design ?? signedFosterDesign(times, tau, o);
   const scale = Math.abs(steady) > 0 ? Math.abs(steady) : Math.max(1e-300, ...values.map(Math.abs));
   let R: number[];
   let converged = true;
   if (o.sign === 'nonnegative') {
     const A: number[][] = [];
     const b: number[] = [];
-    times.forEach((t, i) => {
+    times.forEach((_, i) => {
       const w = 1 / Math.max(Math.abs(values[i]), o.floor * scale);
-      A.push(tau.map((tk) => -Math.expm1(-t / tk) * w));
+      A.push(d.basis[i].map((e) => e * w));
       b.push(values[i] * w);
     });
     const ws = o.steadyWeight / scale;
@@ -84,11 +90,15 @@ export function fitFoster(
     const r = nnls(A, b);
     R = r.x;
     converged = r.converged;
-  } else R = qrSolve(design ?? signedFosterDesign(times, tau, o), [...values, steady * o.steadyWeight]);
+  } else R = qrSolve(d.qr, [...values, steady * o.steadyWeight]);
   const sum = R.reduce((a, r) => a + r, 0);
   if (o.sign === 'nonnegative' && sum > 0) R = R.map((r) => (r * steady) / sum);
   else if (o.sign === 'signed') R[R.length - 1] += steady - sum;
   let maxAbsError = 0;
-  times.forEach((t, i) => (maxAbsError = Math.max(maxAbsError, Math.abs(fosterStep(R, tau, t) - values[i]))));
+  d.basis.forEach((row, i) => {
+    let z = 0;
+    for (let k = 0; k < R.length; k++) z += R[k] * row[k];
+    maxAbsError = Math.max(maxAbsError, Math.abs(z - values[i]));
+  });
   return { R, maxAbsError, relError: maxAbsError / scale, converged };
 }

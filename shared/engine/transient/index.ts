@@ -3,7 +3,7 @@ export { stehfestAbscissae, stehfestCombine, stehfestInvert, stehfestWeights, ST
 export { talbotInvert, TALBOT_NODES, type Complex } from './talbot';
 export { leastSquares, qrFactor, qrSolve, type QrFactors } from './leastSquares';
 export { nnls, type NnlsResult } from './nnls';
-export { fitFoster, fosterStep, logSpacedTaus, signedFosterDesign, FOSTER_FIT_DEFAULTS, type FosterFit, type FosterFitSettings } from './fosterFit';
+export { fitFoster, fosterStep, logSpacedTaus, signedFosterDesign, FOSTER_FIT_DEFAULTS, type FosterDesign, type FosterFit, type FosterFitSettings } from './fosterFit';
 export {
   fitFosterNetwork,
   networkStep,
