@@ -38,6 +38,18 @@ async function probe(url: string, during: Promise<unknown>, phase: string): Prom
   return { phase, count: times.length, p95: times[Math.ceil(0.95 * times.length) - 1] ?? NaN, max: times[times.length - 1] ?? NaN };
 }
 
+/** Wait (at most DRAIN_LIMIT_MS) until the server uses under a fifth of a core: work left by timed-out requests of the last phase is done. */
+const DRAIN_LIMIT_MS = 120_000;
+async function drain(cpuMs: () => number): Promise<void> {
+  const end = Date.now() + DRAIN_LIMIT_MS;
+  while (Date.now() < end) {
+    const c0 = cpuMs();
+    await new Promise((r) => setTimeout(r, 1000));
+    if (cpuMs() - c0 < 200) return;
+  }
+  console.log(`server still busy after ${DRAIN_LIMIT_MS / 1000} s; going on`);
+}
+
 async function main(): Promise<void> {
   const { values } = parseArgs({ options: { levels: { type: 'string', default: '1,10,50' }, 'no-write': { type: 'boolean', default: false } } });
   const levels = values.levels.split(',').map(Number).filter((n) => REQUESTS[n]);
@@ -54,16 +66,23 @@ async function main(): Promise<void> {
     await warmUp(s0, warm, 4);
     const cached = await loadVariant(s0, base, 'Load cached');
     await s0.request('POST', `/api/variants/${cached}/solve`, { scenarioId: 'load-0' });
+    const prepared = new Map<number, number[]>();
     for (const level of levels) {
       const vids: number[] = [];
       for (let i = 0; i < level; i++) vids.push(await loadVariant(sessions[i % sessions.length], base, `Load ${level}-${i}`));
+      prepared.set(level, vids);
+    }
+    for (const level of levels) {
+      const vids = prepared.get(level)!;
       const per = Math.max(1, Math.floor(REQUESTS[level] / level));
       const solveTarget = (i: number, scenario: (k: number) => string, vid: number): PhaseTarget => ({
         method: 'POST', path: `/api/variants/${vid}/solve`, headers: headers(sessions[i % sessions.length]),
         body: (k) => JSON.stringify({ scenarioId: scenario(k) }),
       });
       const idx = Array.from({ length: level }, (_, i) => i);
+      await drain(server.cpuMs);
       rows.push(await runPhase(server.url, 'solve, cached (stored result)', idx.map((i) => solveTarget(i, () => 'load-0', cached)), per, server.cpuMs));
+      await drain(server.cpuMs);
       const uncachedRun = runPhase(server.url, 'solve, uncached (new scenario)', idx.map((i) => solveTarget(i, (k) => `load-${k % LOAD_SCENARIOS}`, vids[i])), Math.min(per, LOAD_SCENARIOS), server.cpuMs);
       probes.push(await probe(server.url, uncachedRun, `uncached solves, ${level} clients`));
       rows.push(await uncachedRun);
@@ -81,6 +100,7 @@ async function main(): Promise<void> {
           },
         });
       }
+      await drain(server.cpuMs);
       rows.push(await runPhase(server.url, 'save (PUT variant, own variant per client)', saveTargets, per, server.cpuMs));
       console.log(phaseTable(rows.slice(-3)));
     }
