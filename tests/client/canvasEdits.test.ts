@@ -5,6 +5,8 @@ import { checkLayout } from '@shared/layout/rules';
 import { defaultTemplates } from '@/components/canvas/defaultTemplates';
 import { deleteParts, nudgeParts, placePart, rotateParts, snapTo, withPositions } from '@/components/canvas/edits';
 import { freeSpot } from '@/components/canvas/freeSpot';
+import { partsInBox } from '@/components/canvas/boxSelect';
+import { zoomIdentity } from 'd3';
 import { addScenario, removeScenario, totalPower } from '@/components/loads/loadEdits';
 import { expectClose } from '../helpers/float';
 import { testModel } from './helpers/demoModel';
@@ -50,6 +52,17 @@ describe('placement edits', () => {
     const at = freeSpot(m, defaultTemplates.io);
     placePart(m, defaultTemplates.io, at);
     expect(checkLayout(m)).toEqual([]);
+  });
+});
+
+describe('box selection', () => {
+  test('parts meeting the box are added to the current selection', () => {
+    const m = testModel();
+    const t = zoomIdentity.translate(10, 10).scale(2); // 2 px per mm; world y is down from the top edge (34 mm)
+    // screen (10 + 2·x_mm, 10 + 2·(34 − y_mm)): a box over x 20–30 mm, y 10–20 mm meets only the memory (26.5–37.5 mm)
+    expect(partsInBox(m, t, [50, 38], [70, 58])).toEqual(['mem0']);
+    expect(partsInBox(m, t, [50, 38], [70, 58], ['cpu0'])).toEqual(['cpu0', 'mem0']);
+    expect(partsInBox(m, t, [10, 10], [12, 12])).toEqual([]);
   });
 });
 

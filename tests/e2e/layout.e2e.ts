@@ -83,7 +83,7 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
   await page.keyboard.press('Control+z');
   await expect(mmOf(memory)).resolves.toBe(xb);
 
-  const before = await page.locator('[data-test^="part-"]').count();
+  const before = await page.locator('[data-part-id]').count();
   const box = (await page.locator('[data-test="layout-canvas"]').boundingBox())!;
   const from = await centre(page.locator('[data-test="palette-passive"]'));
   await page.mouse.move(from.x, from.y);
@@ -91,10 +91,15 @@ test('the engineer drags a memory stack next to a compute chiplet, then onto it 
   await page.mouse.move(box.x + box.width * 0.3, box.y + box.height * 0.8, { steps: 8 });
   await page.locator('[data-test="drop-ghost"]').waitFor();
   await page.mouse.up();
-  await expect(page.locator('[data-test^="part-"]').count()).resolves.toBe(before + 1);
+  await expect(page.locator('[data-part-id]').count()).resolves.toBe(before + 1);
   await shot(page, 'layout-engineer-dropped');
   await page.keyboard.press('Control+z');
-  await expect(page.locator('[data-test^="part-"]').count()).resolves.toBe(before);
+  await expect(page.locator('[data-part-id]').count()).resolves.toBe(before);
+
+  await page.keyboard.down('Shift');
+  await dragBy(page, { x: box.x + 40, y: box.y + 40 }, { x: box.x + box.width - 10, y: box.y + box.height - 10 });
+  await page.keyboard.up('Shift');
+  await expect(page.locator('[data-test="inspector"]').textContent()).resolves.toContain(`${before} parts selected`);
   await page.locator('[data-test="save"]').click();
   await page.locator('[data-test="version"]').filter({ hasText: 'v2' }).waitFor();
 });
@@ -131,8 +136,9 @@ test('the reviewer sees the layout but cannot drag a part', async () => {
     await signIn(rp, 'reviewer');
     await rp.goto(variantUrl);
     await rp.locator('[data-test="layout-canvas"]').waitFor();
-    const part = rp.locator('[data-test^="part-"]').first();
+    const part = rp.locator('[data-part-id]').first();
     const x0 = await mmOf(part);
+    expect(x0, 'the part carries its centre x').toBeGreaterThan(0);
     const at = await centre(part.locator('rect.body'));
     await dragBy(rp, at, { x: at.x + 80, y: at.y + 40 });
     await expect(mmOf(part)).resolves.toBe(x0);
