@@ -1,7 +1,7 @@
 /** Timeline in the browser: the demo variant's impedance, the boost pulse profile, a timing sentence; screenshots light and dark. */
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { baseUrl, openBrowser, shot, signIn } from './browser';
 
 let page: Page;
 let close: () => Promise<void>;
@@ -39,6 +39,8 @@ test('the engineer runs the boost pulse profile and reads the timing answers', a
   await page.locator('[data-test="temperature-panel"] [data-test="chart-hover"]').hover({ position: { x: 300, y: 100 } });
   await page.locator('[data-test="chart-readout"]').waitFor();
   await shot(page, 'timeline-light');
+  await page.locator('[data-test="impedance-panel"] .n-radio-button', { hasText: 'From one part' }).click();
+  await page.locator('[data-test="impedance-panel"]').screenshot({ path: 'tests/e2e/screenshots/timeline-transfer.png' });
 });
 
 test('the electro-thermal panel states the operating point and its margins', async () => {
@@ -68,4 +70,17 @@ test('the impedance shows progress, can be cancelled and recomputed; dark theme'
   await page.locator('.n-tabs-tab', { hasText: 'Electro-thermal' }).click();
   await page.locator('[data-test="coupling-summary"]').waitFor({ timeout: 60000 });
   await shot(page, 'electrothermal-dark');
+});
+
+test('a reviewer sees the profile and leakage fields read-only', async () => {
+  const url = page.url();
+  await page.locator('[data-test="signout"]').click();
+  await signIn(page, 'reviewer');
+  await page.goto(url.startsWith('http') ? url : `${baseUrl()}/`);
+  await page.locator('.n-tabs-tab', { hasText: 'Timeline' }).click();
+  await page.locator('[data-test="profile-editor"]').waitFor();
+  await expect(page.locator('[data-test="add-steady"]').count()).resolves.toBe(0);
+  await page.locator('.n-tabs-tab', { hasText: 'Electro-thermal' }).click();
+  await page.locator('[data-test="leakage-table"]').waitFor();
+  await expect(page.locator('[data-test="leakage-cpu-w"] [data-test="et-kappa"] input').isDisabled()).resolves.toBe(true);
 });

@@ -33,10 +33,11 @@ export function chartGeometry(
   const [x0, x1] = extent(positive) as [number, number];
   const all = series.flatMap((s) => s.values.filter(Number.isFinite)).concat(limits.map((l) => l.value));
   let [y0, y1] = (extent(all) as [number, number]) ?? [0, 1];
-  if (yFloor !== undefined) y0 = Math.min(y0 ?? yFloor, yFloor);
   if (!(y1 > y0)) y1 = (y0 ?? 0) + 1;
   const pad = 0.05 * (y1 - y0);
-  const y = scaleLinear().domain([y0 - (yFloor !== undefined && y0 === yFloor ? 0 : pad), y1 + pad]).range([h, 0]).nice();
+  // a floor (e.g. 0 K/W) is the axis start unless the data clearly go below it
+  const low = yFloor !== undefined && y0 >= yFloor - pad ? yFloor : y0 - pad;
+  const y = scaleLinear().domain([low, y1 + pad]).range([h, 0]).nice();
   const unit = timeUnit((x1 ?? 1) - (log ? 0 : (x0 ?? 0)));
   const x = log ? scaleLog().domain([x0 ?? 1e-6, x1 ?? 1]).range([0, w]) : scaleLinear().domain([x0 ?? 0, x1 ?? 1]).range([0, w]);
   const xTicks = log
