@@ -40,7 +40,7 @@ describe('backup and restore', () => {
     const saves = (async () => {
       let { model, version } = (await f.owner.get(`/api/variants/${vid}`)).body;
       for (let i = 0; i < 25; i++) {
-        model.stack.cooling.top.ambient = 25 + i * 0.1;
+        model.stack.cooling.top.fluidTemperature = 25 + i * 0.1;
         const res = await f.owner.put(`/api/variants/${vid}`, { model, version });
         expect(res.status).toBe(200);
         ({ model, version } = res.body);
