@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { EngineInputError } from '../shared/engine/errors';
-import { solveChannelRequest } from '../shared/engine/channelRequest';
+import { solveChannelBody } from '../shared/engine/channelSolve';
 import { assemblyCsv } from '../shared/engine/assembly/csv';
 import { solveModelDocument } from '../shared/engine/assembly/modelFile';
 
@@ -35,7 +35,7 @@ function run(argv: string[]): string {
   const [command, file, ...rest] = argv;
   if (!command || command === '--help' || command === '-h') throw new CliError(USAGE);
   if (!file) throw new CliError(`missing file\n${USAGE}`);
-  if (command === 'channel') return JSON.stringify(solveChannelRequest(readJson(file)));
+  if (command === 'channel') return JSON.stringify(solveChannelBody(readJson(file)));
   if (command === 'solve') {
     let scenario: string | undefined;
     let csv = false;

@@ -1,5 +1,5 @@
 /** Runs one engine task inside a worker thread; engine failures come back as data, never as a thrown clone. */
-import { solveAssembly, solveChannelRequest } from '@shared/engine';
+import { solveAssembly, solveChannelBody } from '@shared/engine';
 import { EngineInputError } from '@shared/engine/errors';
 import { assemblyImpedance } from '@shared/engine/transient';
 import type { EngineTask, ProgressMessage, TaskOutcome } from './taskTypes';
@@ -9,7 +9,7 @@ const PROGRESS_STEP = 0.02;
 
 function compute(task: EngineTask): unknown {
   if (task.kind === 'assembly') return solveAssembly(task.model, task.scenarioId);
-  if (task.kind === 'channel') return solveChannelRequest(task.body);
+  if (task.kind === 'channel') return solveChannelBody(task.body);
   let last = -1;
   const onProgress = (fraction: number) => {
     if (fraction - last < PROGRESS_STEP && fraction < 1) return;

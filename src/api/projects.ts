@@ -1,6 +1,6 @@
 /** Projects, assemblies and their activity trail. */
 import { http } from './http';
-import type { ActivityEvent, Assembly, Project } from './types';
+import type { Assembly, Project } from './types';
 
 export const listProjects = (wid: number) => http.get<Project[]>(`/api/workspaces/${wid}/projects`);
 export const createProject = (wid: number, body: { name: string; description?: string }) =>
@@ -10,4 +10,3 @@ export const listAssemblies = (pid: number) => http.get<Assembly[]>(`/api/projec
 export const createAssembly = (pid: number, body: { name: string; description?: string }) =>
   http.post<Assembly>(`/api/projects/${pid}/assemblies`, body);
 export const getAssembly = (aid: number) => http.get<Assembly>(`/api/assemblies/${aid}`);
-export const listActivity = (pid: number) => http.get<ActivityEvent[]>(`/api/projects/${pid}/activity`);
