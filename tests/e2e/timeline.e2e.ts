@@ -36,7 +36,7 @@ test('the engineer runs the boost pulse profile and reads the timing answers', a
   const text = await page.locator('[data-test="timing-boost"]').textContent();
   console.log(`timing: ${text}`);
   expect(text).toMatch(/Compute chiplet South (reaches|stays below|is already)/);
-  await page.locator('[data-test="temperature-panel"] [data-test="chart-hover"]').hover({ position: { x: 300, y: 100 } });
+  await page.locator('[data-test="temperature-panel"] [data-test="chart-hover"]').first().hover({ position: { x: 300, y: 100 } });
   await page.locator('[data-test="chart-readout"]').waitFor();
   await shot(page, 'timeline-light');
   await page.locator('[data-test="impedance-panel"] .n-radio-button', { hasText: 'From one part' }).click();

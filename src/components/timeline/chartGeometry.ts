@@ -43,7 +43,7 @@ export function chartGeometry(
   const xTicks = log
     ? (x.ticks() as number[]).filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9).map((t) => ({ at: x(t), label: logTickLabel(t) }))
     : scaleLinear().domain([(x0 ?? 0) / unit.scale, (x1 ?? 1) / unit.scale]).ticks(8).map((t) => ({ at: x(t * unit.scale), label: tickLabel(t * unit.scale, unit.scale) }));
-  const yTicks = y.ticks(6).map((t) => ({ at: y(t), label: String(t) }));
+  const yTicks = y.ticks(Math.max(3, Math.min(6, Math.round(h / 45)))).map((t) => ({ at: y(t), label: String(t) }));
   const path = line<number>()
     .defined((v, i) => Number.isFinite(v) && (!log || xs[i] > 0))
     .x((_, i) => x(xs[i]))
