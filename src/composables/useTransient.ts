@@ -4,7 +4,7 @@
  * and timing answers. The impedance depends only on the stack-up and geometry (networkKey), so load
  * and profile edits reuse it.
  */
-import { computed, onScopeDispose, ref, shallowRef, toRaw, type Ref } from 'vue';
+import { computed, onScopeDispose, ref, shallowRef, toRaw, watch, type Ref } from 'vue';
 import type { Model } from '@shared/schemas/model';
 import type { SimulationResult, TimingAnswers, TimingRequest } from '@shared/engine/transient';
 import { createJobRunner, JobCancelledError, type JobRunner } from '@/components/timeline/jobRunner';
@@ -41,6 +41,8 @@ export function useTransient(source: TransientSource, createWorker?: () => Trans
   /** The shown impedance belongs to an older stack-up or geometry. */
   const stale = computed(() => !!impedance.value && impedanceKey.value !== currentKey.value);
   const ready = computed(() => !!impedance.value && !stale.value);
+  // an impedance error belongs to one stack-up: forget it when that changes, so the screen may try again
+  watch(currentKey, () => (impedanceError.value = null));
 
   /** Compute the impedance of the current model (restarts a running computation). */
   async function computeImpedance(count = 60): Promise<void> {
