@@ -3,6 +3,7 @@ import path from 'node:path';
 import fs from 'node:fs';
 import sqlite3 from 'sqlite3';
 import { Sequelize, Transaction } from 'sequelize';
+import { queueWriteTransactions } from './writeQueue';
 
 /** Milliseconds a connection waits for another writer before SQLITE_BUSY. */
 export const BUSY_TIMEOUT_MS = 5000;
@@ -26,6 +27,7 @@ export async function openDatabase(dataDir: string): Promise<Sequelize> {
     transactionType: Transaction.TYPES.IMMEDIATE,
     define: { underscored: true },
   });
+  queueWriteTransactions(sequelize);
   await sequelize.query('PRAGMA journal_mode=WAL');
   await sequelize.query('PRAGMA foreign_keys=ON');
   return sequelize;
