@@ -12,6 +12,7 @@ import { commentsRouter } from './comments/commentsRouter';
 import { activityRouter } from './activity/activityRouter';
 import { libraryRouter } from './library/libraryRouter';
 import { solveRouter } from './solve/solveRouter';
+import { transientRouter } from './transient/transientRouter';
 import { healthRouter } from './health';
 import { ioRouter } from './io/ioRouter';
 import { jobsRouter } from '../workers/jobsRouter';
@@ -31,6 +32,7 @@ export function apiRoutes(ctx: AppContext): Router {
   r.use(activityRouter());
   r.use(libraryRouter());
   r.use(solveRouter());
+  r.use(transientRouter());
   r.use(ioRouter());
   r.use(jobsRouter());
   return r;

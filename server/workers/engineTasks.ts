@@ -1,7 +1,7 @@
 /** Runs one engine task inside a worker thread; engine failures come back as data, never as a thrown clone. */
 import { solveAssembly, solveChannelBody } from '@shared/engine';
 import { EngineInputError } from '@shared/engine/errors';
-import { assemblyImpedance } from '@shared/engine/transient';
+import { assemblyImpedance, modelTimingAnswers, prepareModelTransient, scenarioTimeline } from '@shared/engine/transient';
 import type { EngineTask, ProgressMessage, TaskOutcome } from './taskTypes';
 
 /** Minimum change of the fraction between two progress messages (keeps the port quiet). */
@@ -10,6 +10,8 @@ const PROGRESS_STEP = 0.02;
 function compute(task: EngineTask): unknown {
   if (task.kind === 'assembly') return solveAssembly(task.model, task.scenarioId);
   if (task.kind === 'channel') return solveChannelBody(task.body);
+  if (task.kind === 'timeline') return scenarioTimeline(prepareModelTransient(task.model), task.model, task.scenarioId, { feedback: task.feedback });
+  if (task.kind === 'timing') return modelTimingAnswers(prepareModelTransient(task.model), task.model, task.request);
   let last = -1;
   const onProgress = (fraction: number) => {
     if (fraction - last < PROGRESS_STEP && fraction < 1) return;

@@ -1,13 +1,16 @@
 /** Messages between the server and its engine worker threads (structured-clone safe). */
 import type { Model } from '@shared/schemas/model';
 import type { InputIssue } from '@shared/engine/errors';
+import type { PartTimingRequest } from '@shared/engine/transient';
 import type { MessagePort } from 'node:worker_threads';
 
 /** One unit of engine work for a worker thread. */
 export type EngineTask =
   | { kind: 'assembly'; model: Model; scenarioId: string }
   | { kind: 'channel'; body: unknown }
-  | { kind: 'impedance'; model: Model; count: number; port?: MessagePort };
+  | { kind: 'impedance'; model: Model; count: number; port?: MessagePort }
+  | { kind: 'timeline'; model: Model; scenarioId: string; feedback: boolean }
+  | { kind: 'timing'; model: Model; request: PartTimingRequest };
 
 /** Progress message a long task posts on its port: fraction done, 0–1. */
 export interface ProgressMessage {

@@ -16,13 +16,15 @@ export const ASSEMBLY_KIND = 'assembly-steady';
 /** Engine identity in the cache key: results are recomputed after an upgrade. */
 export const ENGINE_KEY = `heatloom-engine@${pkg.version}`;
 
-async function current(id: number): Promise<{ model: Model; version: number; name: string }> {
+/** The variant's current model, version and name (404 when unknown). */
+export async function current(id: number): Promise<{ model: Model; version: number; name: string }> {
   const v = await findVariant(id);
   if (!v) throw new NotFoundError('Variant');
   return { model: JSON.parse(v.model) as Model, version: v.version, name: v.name };
 }
 
-function scenarioOf(model: Model, scenarioId?: string): string {
+/** The scenario id to use (the model's first when absent); 400 naming the choices when unknown. */
+export function scenarioOf(model: Model, scenarioId?: string): string {
   const id = scenarioId ?? model.scenarios[0].id;
   if (!model.scenarios.some((s) => s.id === id)) {
     throw new ValidationError([{ path: 'scenarioId', message: `no scenario "${id}" (this variant has: ${model.scenarios.map((s) => s.id).join(', ')})` }]);

@@ -100,6 +100,11 @@ const cases: Case[] = [
   },
   { method: 'post', route: 'POST /solve/channel', path: () => '/api/solve/channel', body: () => channelBody, expect: all, outsider: 200 },
   { method: 'post', route: 'POST /variants/:vid/solve', path: (f) => `/api/variants/${f.vid}/solve`, body: () => ({ scenarioId: 'idle' }), expect: design },
+  { method: 'post', route: 'POST /variants/:vid/timeline', path: (f) => `/api/variants/${f.vid}/timeline`, body: () => ({ scenarioId: 'boost' }), expect: design },
+  {
+    method: 'post', route: 'POST /variants/:vid/timing', path: (f) => `/api/variants/${f.vid}/timing`,
+    body: () => ({ partId: 'cpu-w', scenarioId: 'boost', boostPower: 145, startFrom: 'idle', period: 0.1 }), expect: design,
+  },
   {
     method: 'get', route: 'GET /variants/:vid/results',
     path: async (f) => { await f.owner.post(`/api/variants/${f.vid}/solve`, { scenarioId: 'idle' }); return `/api/variants/${f.vid}/results?scenarioId=idle`; },
