@@ -14,6 +14,12 @@ export async function findResult(variantId: number, kind: string, inputHash: str
   return r ? { result: JSON.parse(r.result), createdAt: r.createdAt } : null;
 }
 
+/** The stored result of (variant, kind, inputHash) as its JSON text, or null (no parse: answers pass it through). */
+export async function findResultText(variantId: number, kind: string, inputHash: string): Promise<{ text: string; createdAt: Date } | null> {
+  const r = await StoredResultModel.findOne({ where: { variantId, kind, inputHash } });
+  return r ? { text: r.result, createdAt: r.createdAt } : null;
+}
+
 /** Store a result (a concurrent identical store keeps the first). */
 export async function storeResult(variantId: number, kind: string, inputHash: string, result: unknown, transaction: Transaction): Promise<Date> {
   const [row] = await StoredResultModel.findOrCreate({

@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { variantSolveSchema } from '@shared/schemas/solve';
 import { authorize, requireUserId } from '../../lib/permissions';
 import { validate } from '../../lib/validate';
-import { solveVariant, storedVariantResult } from './solveService';
+import { answerJson, solveVariant, storedVariantResult } from './solveService';
 import { runEngineTask } from '../../lib/workerPool';
 
 /** Build the solve router. */
@@ -18,13 +18,13 @@ export function solveRouter(): Router {
   r.post('/variants/:vid/solve', async (req, res) => {
     const a = await authorize(req, 'variant', req.params.vid, 'analysis.run');
     const { scenarioId } = validate(variantSolveSchema, req.body);
-    res.json(await solveVariant(a, a.variantId!, scenarioId));
+    res.type('application/json').send(answerJson(await solveVariant(a, a.variantId!, scenarioId)));
   });
 
   r.get('/variants/:vid/results', async (req, res) => {
     const a = await authorize(req, 'variant', req.params.vid, 'workspace.read');
     const { scenarioId } = validate(variantSolveSchema, req.query);
-    res.json(await storedVariantResult(a.variantId!, scenarioId));
+    res.type('application/json').send(answerJson(await storedVariantResult(a.variantId!, scenarioId)));
   });
 
   return r;

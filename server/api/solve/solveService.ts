@@ -37,29 +37,43 @@ export function inputHash(model: Model, scenarioId: string): string {
   return sha256(JSON.stringify({ engine: ENGINE_KEY, kind: ASSEMBLY_KIND, scenarioId, model }));
 }
 
+/** A stored result whose engine output is kept as JSON text, so a cached answer is never parsed and re-serialised. */
+export interface StoredAnswer {
+  meta: Omit<StoredResult, 'result'>;
+  resultJson: string;
+}
+
+/** The answer's JSON body: the metadata with the stored result text spliced in. */
+export function answerJson(a: StoredAnswer): string {
+  return `${JSON.stringify(a.meta).slice(0, -1)},"result":${a.resultJson}}`;
+}
+
 /** Solve (or reuse) one scenario of the variant's current version. */
-export async function solveVariant(a: Access, id: number, scenarioId?: string): Promise<StoredResult> {
+export async function solveVariant(a: Access, id: number, scenarioId?: string): Promise<StoredAnswer> {
   const v = await current(id);
   const sid = scenarioOf(v.model, scenarioId);
   const hash = inputHash(v.model, sid);
   const base = { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash };
-  const stored = await repo.findResult(id, ASSEMBLY_KIND, hash);
-  if (stored) return { ...base, cached: true, createdAt: stored.createdAt.toISOString(), result: stored.result };
+  const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash);
+  if (stored) return { meta: { ...base, cached: true, createdAt: stored.createdAt.toISOString() }, resultJson: stored.text };
   const result = await runEngineTask<AssemblyResult>({ kind: 'assembly', model: v.model, scenarioId: sid });
   const createdAt = await repo.inTransaction(async (t) => {
     const at = await repo.storeResult(id, ASSEMBLY_KIND, hash, result, t);
     await recordActivity({ projectId: a.projectId!, variantId: id, actorId: a.userId, kind: 'analysis.stored', summary: `"${v.name}" version ${v.version}: solved scenario "${sid}"` }, t);
     return at;
   });
-  return { ...base, cached: false, createdAt: createdAt.toISOString(), result: JSON.parse(JSON.stringify(result)) };
+  return { meta: { ...base, cached: false, createdAt: createdAt.toISOString() }, resultJson: JSON.stringify(result) };
 }
 
 /** The stored result for the variant's current version, or 404 when it has not been solved. */
-export async function storedVariantResult(id: number, scenarioId?: string): Promise<StoredResult> {
+export async function storedVariantResult(id: number, scenarioId?: string): Promise<StoredAnswer> {
   const v = await current(id);
   const sid = scenarioOf(v.model, scenarioId);
   const hash = inputHash(v.model, sid);
-  const stored = await repo.findResult(id, ASSEMBLY_KIND, hash);
+  const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash);
   if (!stored) throw new NotFoundError('Stored result');
-  return { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, cached: true, createdAt: stored.createdAt.toISOString(), result: stored.result };
+  return {
+    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, cached: true, createdAt: stored.createdAt.toISOString() },
+    resultJson: stored.text,
+  };
 }
