@@ -17,7 +17,7 @@ afterAll(async () => close?.());
 const measures = (p: Page) => p.evaluate(() => performance.getEntriesByName('hl-drop-to-result').map((e) => e.duration));
 
 async function waitCurrent(p: Page): Promise<void> {
-  await p.locator('[data-test="live-status"][data-state="current"]').first().waitFor({ timeout: 30000 });
+  await p.locator('[data-test="live-status"][data-state="current"]').first().waitFor({ timeout: 60000 });
 }
 
 async function rowNumbers(row: Locator): Promise<number[]> {
@@ -65,6 +65,8 @@ test('dragging a memory stack toward a compute chiplet updates its temperatures 
   await openTab(page, 'Layout');
   const mem = page.locator('[data-test="part-mem-1"] rect.body');
   await mem.waitFor();
+  await waitCurrent(page);
+  await page.waitForTimeout(500); // let the canvas finish fitting to view before its box is measured
   const first = await timedDrag(page, mem, -0.8);
   const more = [await timedDrag(page, mem, 0.3), await timedDrag(page, mem, -0.3), await timedDrag(page, mem, -0.3)];
   const engine = await page.locator('[data-test="drop-to-result"]').first().getAttribute('data-engine-ms');
