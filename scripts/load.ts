@@ -12,13 +12,13 @@ import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { startServer } from './reliability/serverProcess';
 import { demoVariantId } from './reliability/demoData';
-import { LOAD_SCENARIOS, loadVariant, signInSessions, warmUp } from './reliability/loadSetup';
+import { LOAD_SCENARIOS, loadVariant, movedVariants, signInSessions, warmUp } from './reliability/loadSetup';
 import { runPhase, type PhaseFigures, type PhaseTarget } from './reliability/loadPhase';
 import { phaseTable, writeLoadSection, type ProbeFigures } from './reliability/loadReport';
 import type { HttpSession } from './reliability/httpSession';
 
 /** Requests per phase at each level (split over the clients; uncached capped by the scenarios per variant). */
-const REQUESTS = { 1: 20, 10: 100, 50: 200 } as Record<number, number>;
+const REQUESTS = { 1: 20, 10: 200, 50: 400 } as Record<number, number>;
 
 function headers(s: HttpSession): Record<string, string> {
   return { cookie: s.cookie, 'x-csrf-token': s.csrf, 'content-type': 'application/json' };
@@ -67,10 +67,12 @@ async function main(): Promise<void> {
     const cached = await loadVariant(s0, base, 'Load cached');
     await s0.request('POST', `/api/variants/${cached}/solve`, { scenarioId: 'load-0' });
     const prepared = new Map<number, number[]>();
+    const moved = new Map<number, number[]>();
     for (const level of levels) {
       const vids: number[] = [];
       for (let i = 0; i < level; i++) vids.push(await loadVariant(sessions[i % sessions.length], base, `Load ${level}-${i}`));
       prepared.set(level, vids);
+      moved.set(level, await movedVariants(sessions, base, level * Math.max(1, Math.floor(REQUESTS[level] / level)), `Moved ${level}`));
     }
     for (const level of levels) {
       const vids = prepared.get(level)!;
@@ -86,6 +88,12 @@ async function main(): Promise<void> {
       const uncachedRun = runPhase(server.url, 'solve, uncached (new scenario)', idx.map((i) => solveTarget(i, (k) => `load-${k % LOAD_SCENARIOS}`, vids[i])), Math.min(per, LOAD_SCENARIOS), server.cpuMs);
       probes.push(await probe(server.url, uncachedRun, `uncached solves, ${level} clients`));
       rows.push(await uncachedRun);
+      const movedIds = moved.get(level)!;
+      await drain(server.cpuMs);
+      rows.push(await runPhase(server.url, 'solve, uncached (part moved: new network)', idx.map((i) => ({
+        method: 'POST', path: (k: number) => `/api/variants/${movedIds[i * per + k]}/solve`, headers: headers(sessions[i % sessions.length]),
+        body: () => JSON.stringify({ scenarioId: 'boost' }),
+      })), per, server.cpuMs));
       const saveTargets: PhaseTarget[] = [];
       for (const i of idx) {
         const s = sessions[i % sessions.length];
@@ -102,7 +110,7 @@ async function main(): Promise<void> {
       }
       await drain(server.cpuMs);
       rows.push(await runPhase(server.url, 'save (PUT variant, own variant per client)', saveTargets, per, server.cpuMs));
-      console.log(phaseTable(rows.slice(-3)));
+      console.log(phaseTable(rows.slice(-4)));
     }
   } catch (err) {
     console.error(`Server output (last 3000 characters):\n${server.output().slice(-3000)}`);

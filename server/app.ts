@@ -21,7 +21,7 @@ import { migrate } from './db/migrate';
 import { seedDemoIfEmpty } from './db/seeders/demoSeed';
 import { storeReceivedMail } from './api/outbox/outboxRepository';
 import { apiRoutes } from './api/routes';
-import { closePool } from './lib/workerPool';
+import { closePool, configurePool } from './lib/workerPool';
 import { assertWritableDataDir, storageErrors } from './lib/storageErrors';
 
 /** A built app with its resources; `close` releases them (server sockets are the caller's). */
@@ -45,6 +45,8 @@ export async function createApp(config: Config): Promise<BuiltApp> {
   initModels(sequelize);
   const applied = await migrate(sequelize);
   if (applied.length) logger.info(`Applied migrations: ${applied.join(', ')}`);
+  const { maxThreads, maxQueue } = config.engine;
+  if (maxThreads || maxQueue) await configurePool({ ...(maxThreads ? { maxThreads } : {}), ...(maxQueue ? { maxQueue } : {}) });
 
   let fake: FakeSmtp | null = null;
   if (!config.smtp) fake = await startFakeSmtpOrFallback(config.smtpFakePort, storeReceivedMail, logger);

@@ -8,10 +8,10 @@ import autocannon from 'autocannon';
 /** Hard stop of a phase in seconds, whatever its request count. */
 export const PHASE_LIMIT_S = 90;
 
-/** What each connection sends: the path, and the body of its k-th request (k = 0, 1, …). */
+/** What each connection sends: the path and the body of its k-th request (k = 0, 1, …). */
 export interface PhaseTarget {
   method: 'POST' | 'PUT';
-  path: string;
+  path: string | ((k: number) => string);
   headers: Record<string, string>;
   body(k: number, lastStatus: number): string;
 }
@@ -37,6 +37,10 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 }
 
+function request(t: PhaseTarget, k: number, lastStatus: number) {
+  return { method: t.method, path: typeof t.path === 'string' ? t.path : t.path(k), headers: t.headers, body: t.body(k, lastStatus) };
+}
+
 /** Run one phase against `url`; `targets[i]` drives connection i. */
 export async function runPhase(url: string, name: string, targets: PhaseTarget[], perClient: number, cpuMs: () => number): Promise<PhaseFigures> {
   const cpu0 = cpuMs();
@@ -52,7 +56,7 @@ export async function runPhase(url: string, name: string, targets: PhaseTarget[]
     setupClient: (client) => {
       const t = targets[next++ % targets.length];
       counters.set(client, { k: 0, t });
-      client.setRequests([{ method: t.method, path: t.path, headers: t.headers, body: t.body(0, 0) }]);
+      client.setRequests([request(t, 0, 0)]);
     },
   }) as unknown as autocannon.Instance & Promise<autocannon.Result>;
   instance.on('response', (client: autocannon.Client, status: number, _bytes: number, ms: number) => {
@@ -60,7 +64,7 @@ export async function runPhase(url: string, name: string, targets: PhaseTarget[]
     statuses[status] = (statuses[status] ?? 0) + 1;
     const c = counters.get(client)!;
     c.k++;
-    client.setBody(c.t.body(c.k, status));
+    client.setRequests([request(c.t, c.k, status)]);
   });
   const stopper = setTimeout(() => instance.stop(), PHASE_LIMIT_S * 1000);
   const result = await instance;

@@ -4,7 +4,7 @@ import { HttpSession } from './httpSession';
 import { copyVariant } from './demoData';
 
 /** Scenarios per load variant: each uncached solve request asks for one not solved before. */
-export const LOAD_SCENARIOS = 20;
+export const LOAD_SCENARIOS = 40;
 
 /** Sign in `count` sessions, alternating the demo engineer and owner (both may run analyses and save). */
 export async function signInSessions(url: string, count: number): Promise<HttpSession[]> {
@@ -36,4 +36,22 @@ export async function warmUp(s: HttpSession, vid: number, parallel: number): Pro
   for (let round = 0; round < 2; round++) {
     await Promise.all(Array.from({ length: parallel }, (_, i) => s.request('POST', `/api/variants/${vid}/solve`, { scenarioId: `load-${round * parallel + i}` })));
   }
+}
+
+/**
+ * `count` copies of `base`, each with its first part moved a different few micrometres (n + 1 µm in x), so
+ * every solve of them builds a new network — what a drag on the layout costs, unlike a new scenario.
+ */
+export async function movedVariants(sessions: HttpSession[], base: number, count: number, label: string): Promise<number[]> {
+  const out: number[] = [];
+  for (let n = 0; n < count; n++) {
+    const s = sessions[n % sessions.length];
+    const vid = await copyVariant(s, base, `${label} ${n}`);
+    const cur = (await s.request('GET', `/api/variants/${vid}`)).body;
+    cur.model.parts[0].x += (n + 1) * 1e-6;
+    const res = await s.request('PUT', `/api/variants/${vid}`, { model: cur.model, version: cur.version });
+    if (res.status !== 200) throw new Error(`preparing ${label} ${n} failed: ${res.status} ${JSON.stringify(res.body)}`);
+    out.push(vid);
+  }
+  return out;
 }

@@ -39,6 +39,10 @@ const envSchema = z.object({
   /** Built client folder served in production. */
   CLIENT_DIST_DIR: z.string().min(1).default('dist'),
   LOG_LEVEL: z.enum(['debug', 'info', 'warn', 'error', 'silent']).optional(),
+  /** Engine worker threads; the machine's cores (at most 4) when unset. */
+  ENGINE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Engine tasks allowed to wait for a thread before new ones get 503 solver_busy. */
+  ENGINE_QUEUE: z.coerce.number().int().min(1).max(100000).optional(),
 });
 
 /** Parsed, resolved configuration of one server instance. */
@@ -58,6 +62,8 @@ export interface Config {
   seedDemo: boolean;
   clientDistDir: string;
   logLevel: 'debug' | 'info' | 'warn' | 'error' | 'silent';
+  /** Engine pool overrides (defaults in server/lib/workerPool.ts). */
+  engine: { maxThreads?: number; maxQueue?: number };
   /** argon2id cost; lowered only under NODE_ENV=test. */
   argon2: { memoryCost: number; timeCost: number; parallelism: number };
 }
@@ -89,6 +95,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     seedDemo: e.SEED_DEMO,
     clientDistDir: path.resolve(e.CLIENT_DIST_DIR),
     logLevel: e.LOG_LEVEL ?? (isTest ? 'silent' : 'info'),
+    engine: { maxThreads: e.ENGINE_THREADS, maxQueue: e.ENGINE_QUEUE },
     // argon2 library defaults (RFC 9106 second recommended option is stronger; these match the package's).
     argon2: isTest ? { memoryCost: 1024, timeCost: 1, parallelism: 1 } : { memoryCost: 65536, timeCost: 3, parallelism: 4 },
   };

@@ -2,9 +2,13 @@
 import type { Sequelize } from 'sequelize';
 import { Umzug, SequelizeStorage } from 'umzug';
 import * as m0001 from './migrations/0001-initial';
+import * as m0002 from './migrations/0002-result-maps';
 
 /** Every migration in order; add new ones at the end, never edit an applied one. */
-const migrations = [{ name: '0001-initial', module: m0001 }];
+const migrations = [
+  { name: '0001-initial', module: m0001 },
+  { name: '0002-result-maps', module: m0002 },
+];
 
 /** Apply all pending migrations; returns the names applied. */
 export async function migrate(sequelize: Sequelize): Promise<string[]> {

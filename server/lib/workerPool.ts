@@ -13,7 +13,7 @@ import type { EngineTask, TaskOutcome } from '../workers/taskTypes';
 export interface PoolOptions {
   /** Worker threads (default: available cores, 1–4). */
   maxThreads: number;
-  /** Tasks allowed to wait for a thread before new ones are refused with 503 (default 32). */
+  /** Tasks allowed to wait for a thread before new ones are refused with 503 (default 256: fifty users each with a few solves waiting). */
   maxQueue: number;
   /** Milliseconds an idle thread lives before it exits (default 60 000). */
   idleTimeoutMs: number;
@@ -22,7 +22,7 @@ export interface PoolOptions {
 /** Default pool settings. */
 export const POOL_DEFAULTS: PoolOptions = {
   maxThreads: Math.max(1, Math.min(4, os.availableParallelism())),
-  maxQueue: 32,
+  maxQueue: 256,
   idleTimeoutMs: 60_000,
 };
 

@@ -2,13 +2,16 @@
 import { solveAssembly, solveChannelBody } from '@shared/engine';
 import { EngineInputError } from '@shared/engine/errors';
 import { assemblyImpedance, modelTimingAnswers, prepareModelTransient, scenarioTimeline } from '@shared/engine/transient';
-import type { EngineTask, ProgressMessage, TaskOutcome } from './taskTypes';
+import type { AssemblyTexts, EngineTask, ProgressMessage, TaskOutcome } from './taskTypes';
 
 /** Minimum change of the fraction between two progress messages (keeps the port quiet). */
 const PROGRESS_STEP = 0.02;
 
 function compute(task: EngineTask): unknown {
-  if (task.kind === 'assembly') return solveAssembly(task.model, task.scenarioId);
+  if (task.kind === 'assembly') {
+    const { maps, ...summary } = solveAssembly(task.model, task.scenarioId);
+    return { summary: JSON.stringify(summary), maps: task.maps ? JSON.stringify(maps) : null } satisfies AssemblyTexts;
+  }
   if (task.kind === 'channel') return solveChannelBody(task.body);
   if (task.kind === 'timeline') return scenarioTimeline(prepareModelTransient(task.model), task.model, task.scenarioId, { feedback: task.feedback });
   if (task.kind === 'timing') return modelTimingAnswers(prepareModelTransient(task.model), task.model, task.request);

@@ -6,11 +6,20 @@ import type { MessagePort } from 'node:worker_threads';
 
 /** One unit of engine work for a worker thread. */
 export type EngineTask =
-  | { kind: 'assembly'; model: Model; scenarioId: string }
+  | { kind: 'assembly'; model: Model; scenarioId: string; maps: boolean }
   | { kind: 'channel'; body: unknown }
   | { kind: 'impedance'; model: Model; count: number; port?: MessagePort }
   | { kind: 'timeline'; model: Model; scenarioId: string; feedback: boolean }
   | { kind: 'timing'; model: Model; request: PartTimingRequest };
+
+/**
+ * What an 'assembly' task answers: the result as JSON text without its plane maps, and the maps as
+ * JSON text when asked for (null otherwise) — written on the worker thread, never on the HTTP thread.
+ */
+export interface AssemblyTexts {
+  summary: string;
+  maps: string | null;
+}
 
 /** Progress message a long task posts on its port: fraction done, 0–1. */
 export interface ProgressMessage {

@@ -1,5 +1,4 @@
 /** Stored analyses: solve one scenario of a variant's current model once per (model, scenario, engine version). */
-import type { AssemblyResult } from '@shared/engine';
 import type { Model } from '@shared/schemas/model';
 import type { StoredResult } from '@shared/schemas/solve';
 import pkg from '../../../package.json';
@@ -10,6 +9,7 @@ import { recordActivity } from '../activity/activityRepository';
 import { findVariant } from '../variants/variantsRepository';
 import * as repo from './solveRepository';
 import { runEngineTask } from '../../lib/workerPool';
+import type { AssemblyTexts } from '../../workers/taskTypes';
 
 /** Result kind of the steady assembly solve. */
 export const ASSEMBLY_KIND = 'assembly-steady';
@@ -40,40 +40,87 @@ export function inputHash(model: Model, scenarioId: string): string {
 /** A stored result whose engine output is kept as JSON text, so a cached answer is never parsed and re-serialised. */
 export interface StoredAnswer {
   meta: Omit<StoredResult, 'result'>;
+  /** The result without its plane maps, as JSON text. */
   resultJson: string;
+  /** The plane maps as JSON text, or null when left out of the answer. */
+  mapsJson: string | null;
 }
 
-/** The answer's JSON body: the metadata with the stored result text spliced in. */
+/** The answer's JSON body: the metadata with the stored result text spliced in (its `maps` member last; null when left out). */
 export function answerJson(a: StoredAnswer): string {
-  return `${JSON.stringify(a.meta).slice(0, -1)},"result":${a.resultJson}}`;
+  return `${JSON.stringify(a.meta).slice(0, -1)},"result":${a.resultJson.slice(0, -1)},"maps":${a.mapsJson ?? 'null'}}}`;
 }
 
-/** Solve (or reuse) one scenario of the variant's current version. */
-export async function solveVariant(a: Access, id: number, scenarioId?: string): Promise<StoredAnswer> {
-  const v = await current(id);
-  const sid = scenarioOf(v.model, scenarioId);
-  const hash = inputHash(v.model, sid);
-  const base = { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash };
-  const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash);
-  if (stored) return { meta: { ...base, cached: true, createdAt: stored.createdAt.toISOString() }, resultJson: stored.text };
-  const result = await runEngineTask<AssemblyResult>({ kind: 'assembly', model: v.model, scenarioId: sid });
-  const createdAt = await repo.inTransaction(async (t) => {
-    const at = await repo.storeResult(id, ASSEMBLY_KIND, hash, result, t);
-    await recordActivity({ projectId: a.projectId!, variantId: id, actorId: a.userId, kind: 'analysis.stored', summary: `"${v.name}" version ${v.version}: solved scenario "${sid}"` }, t);
-    return at;
+/** Engine runs in progress by variant, input hash and maps: identical requests at the same time share one run. */
+const inFlight = new Map<string, Promise<{ createdAt: Date; summary: string; maps: string | null }>>();
+
+function shared<T extends { createdAt: Date; summary: string; maps: string | null }>(key: string, run: () => Promise<T>): Promise<T> {
+  let p = inFlight.get(key) as Promise<T> | undefined;
+  if (!p) {
+    p = run().finally(() => inFlight.delete(key));
+    inFlight.set(key, p);
+  }
+  return p;
+}
+
+type Current = Awaited<ReturnType<typeof current>>;
+
+/** Run the engine for this model and scenario and store the result (with its maps when `withMaps`); activity is recorded when the row is new. */
+function computeAndStore(a: Access, id: number, v: Current, sid: string, hash: string, withMaps: boolean) {
+  return shared(`${id}:${hash}:${withMaps}`, async () => {
+    const texts = await runEngineTask<AssemblyTexts>({ kind: 'assembly', model: v.model, scenarioId: sid, maps: withMaps });
+    const createdAt = await repo.inTransaction(async (t) => {
+      const stored = await repo.storeResultText(id, ASSEMBLY_KIND, hash, texts.summary, texts.maps, t);
+      if (stored.created) {
+        await recordActivity({ projectId: a.projectId!, variantId: id, actorId: a.userId, kind: 'analysis.stored', summary: `"${v.name}" version ${v.version}: solved scenario "${sid}"` }, t);
+      }
+      return stored.createdAt;
+    });
+    return { createdAt, ...texts };
   });
-  return { meta: { ...base, cached: false, createdAt: createdAt.toISOString() }, resultJson: JSON.stringify(result) };
 }
 
-/** The stored result for the variant's current version, or 404 when it has not been solved. */
-export async function storedVariantResult(id: number, scenarioId?: string): Promise<StoredAnswer> {
+/** The plane maps of a result stored without them: the engine runs again (same inputs, same answer) and the maps are kept. */
+function addMaps(id: number, v: Current, sid: string, hash: string, createdAt: Date): Promise<string> {
+  return shared(`${id}:${hash}:maps`, async () => {
+    const texts = await runEngineTask<AssemblyTexts>({ kind: 'assembly', model: v.model, scenarioId: sid, maps: true });
+    await repo.storeMaps(id, ASSEMBLY_KIND, hash, texts.maps!);
+    return { createdAt, ...texts };
+  }).then((r) => r.maps!);
+}
+
+/** The stored answer of the current version, with maps added on demand; null when it was never solved. */
+async function storedAnswer(id: number, v: Current, sid: string, hash: string, withMaps: boolean): Promise<StoredAnswer | null> {
+  const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash, withMaps);
+  if (!stored) return null;
+  const mapsJson = withMaps ? (stored.maps ?? (await addMaps(id, v, sid, hash, stored.createdAt))) : null;
+  return {
+    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, mapsIncluded: withMaps, cached: true, createdAt: stored.createdAt.toISOString() },
+    resultJson: stored.text,
+    mapsJson,
+  };
+}
+
+/** Solve (or reuse) one scenario of the variant's current version; the plane maps only when `withMaps`. */
+export async function solveVariant(a: Access, id: number, scenarioId?: string, withMaps = false): Promise<StoredAnswer> {
   const v = await current(id);
   const sid = scenarioOf(v.model, scenarioId);
   const hash = inputHash(v.model, sid);
-  const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash);
-  if (!stored) throw new NotFoundError('Stored result');
+  const stored = await storedAnswer(id, v, sid, hash, withMaps);
+  if (stored) return stored;
+  const fresh = await computeAndStore(a, id, v, sid, hash, withMaps);
   return {
-    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, cached: true, createdAt: stored.createdAt.toISOString() },
-    resultJson: stored.text,
+    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, mapsIncluded: withMaps, cached: false, createdAt: fresh.createdAt.toISOString() },
+    resultJson: fresh.summary,
+    mapsJson: withMaps ? fresh.maps : null,
   };
+}
+
+/** The stored result for the variant's current version (plane maps only when `withMaps`), or 404 when it has not been solved. */
+export async function storedVariantResult(id: number, scenarioId?: string, withMaps = false): Promise<StoredAnswer> {
+  const v = await current(id);
+  const sid = scenarioOf(v.model, scenarioId);
+  const stored = await storedAnswer(id, v, sid, inputHash(v.model, sid), withMaps);
+  if (!stored) throw new NotFoundError('Stored result');
+  return stored;
 }

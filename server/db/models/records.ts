@@ -60,6 +60,8 @@ export class StoredResultModel extends Model<InferAttributes<StoredResultModel>,
   declare kind: string;
   declare inputHash: string;
   declare result: string;
+  /** Plane maps of an assembly result as JSON text, kept apart so most answers never read them (null for other kinds). */
+  declare maps: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -101,7 +103,7 @@ export function initRecordModels(sequelize: Sequelize): void {
     { sequelize, tableName: 'activity_events' },
   );
   StoredResultModel.init(
-    { id, variantId: DataTypes.INTEGER, kind: DataTypes.TEXT, inputHash: DataTypes.STRING, result: DataTypes.TEXT, ...stamps },
+    { id, variantId: DataTypes.INTEGER, kind: DataTypes.TEXT, inputHash: DataTypes.STRING, result: DataTypes.TEXT, maps: DataTypes.TEXT, ...stamps },
     { sequelize, tableName: 'stored_results' },
   );
   OutboxMessageModel.init(

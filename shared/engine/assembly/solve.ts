@@ -10,7 +10,7 @@ import { lidOrigin } from './geometry';
 import { hotSpots } from './hotspot';
 import { IDEALISATIONS } from './idealisations';
 import { findScenario, nodePowers, partPowers } from './loads';
-import { assemblyNetwork, solveNetwork } from './network';
+import { assemblyNetwork, solveNetwork, type AssemblyNetwork } from './network';
 import { planeMaps } from './planeMaps';
 import type { AssemblyResult, MapResult, PartResult } from './result';
 import { overlapWarnings, truncationWarnings } from './warnings';
@@ -27,12 +27,33 @@ export interface AssemblyOptions {
 /** Default plane map side. */
 export const ASSEMBLY_MAP_SIZE = 128;
 
+/**
+ * The last few networks built with the shared impedance cache, by everything but the scenarios: the
+ * network does not depend on loads, so switching scenario or editing powers skips building and factoring it.
+ */
+const NETWORK_MEMO_SIZE = 4;
+const networkMemo = new Map<string, AssemblyNetwork>();
+
+function memoNetwork(model: Model, options: AssemblyOptions): AssemblyNetwork {
+  if (options.cache !== undefined) return assemblyNetwork(model, { truncation: options.truncation, cache: options.cache });
+  const key = JSON.stringify({ ...model, scenarios: null, truncation: options.truncation ?? null });
+  let net = networkMemo.get(key);
+  if (net) {
+    networkMemo.delete(key);
+  } else {
+    net = assemblyNetwork(model, { truncation: options.truncation });
+    if (networkMemo.size >= NETWORK_MEMO_SIZE) networkMemo.delete(networkMemo.keys().next().value!);
+  }
+  networkMemo.set(key, net);
+  return net;
+}
+
 const rows = (flat: Float64Array, n: number, pick: number[]): number[][] => pick.map((j) => pick.map((i) => flat[j * n + i]));
 
 /** Solve one scenario (by id; the first when absent) of a model. */
 export function solveAssembly(model: Model, scenarioId?: string, options: AssemblyOptions = {}): AssemblyResult {
   const { scenario, index } = findScenario(model, scenarioId);
-  const net = assemblyNetwork(model, { truncation: options.truncation, cache: options.cache });
+  const net = memoNetwork(model, options);
   const powers = nodePowers(model, net, scenario, index);
   const state = solveNetwork(net, powers);
   const nn = net.nodes.length;

@@ -1,4 +1,5 @@
 /** Analyses over HTTP: the stateless channel solve and stored variant solves (reused while the model is unchanged). */
+import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Client, makeTestApp, signedIn, type TestApp } from '../helpers/testApp';
 import { demoFixture, type Fixture } from '../helpers/fixtures';
@@ -64,6 +65,44 @@ describe('POST /api/variants/:vid/solve', () => {
     const after = await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'idle' });
     expect(after.body.cached).toBe(false);
     expect(after.body.inputHash).not.toBe(first.body.inputHash);
+  });
+
+  it('leaves the plane maps out unless asked (maps: true / ?maps=true); maps are computed once on demand and kept', async () => {
+    const id = await f.freshVariant();
+    const mapsColumn = async () =>
+      (await t.sequelize.query<{ maps: string | null }>('SELECT maps FROM stored_results WHERE variant_id = ?', { replacements: [id], type: QueryTypes.SELECT }))[0].maps;
+    const slim = await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'boost' });
+    expect(slim.status).toBe(200);
+    expect(slim.body).toMatchObject({ cached: false, mapsIncluded: false });
+    expect(slim.body.result.maps).toBeNull();
+    expect(slim.body.result.parts.length).toBeGreaterThan(0);
+    expect(await mapsColumn()).toBeNull();
+
+    // A reviewer may read the maps of a stored result: they are derived once, then kept.
+    const read = await reviewer.get(`/api/variants/${id}/results?scenarioId=boost&maps=1`);
+    expect(read.body).toMatchObject({ cached: true, mapsIncluded: true, createdAt: slim.body.createdAt });
+    expect(read.body.result.maps.interposer).toMatchObject({ nx: 128, ny: 128 });
+    expect(read.body.result.maps.interposer.values).toHaveLength(128 * 128);
+    expect(await mapsColumn()).not.toBeNull();
+    expect({ ...read.body.result, maps: null }).toEqual(slim.body.result);
+
+    const full = await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'boost', maps: true });
+    expect(full.body).toMatchObject({ cached: true, mapsIncluded: true });
+    expect(full.body.result).toEqual(read.body.result);
+    expect(Buffer.byteLength(slim.text)).toBeLessThan(Buffer.byteLength(full.text) / 5);
+    expect((await reviewer.get(`/api/variants/${id}/results?scenarioId=boost&maps=yes`)).status).toBe(400);
+    expect((await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'boost', maps: 'yes' })).status).toBe(400);
+  });
+
+  it('stores one result and one activity entry when the same new solve is asked for several times at once', async () => {
+    const id = await f.freshVariant();
+    const answers = await Promise.all([0, 1, 2, 3].map((i) => engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'idle', maps: i % 2 === 0 })));
+    expect(answers.map((r) => r.status)).toEqual([200, 200, 200, 200]);
+    expect(new Set(answers.map((r) => r.body.createdAt)).size).toBe(1);
+    const [{ n }] = await t.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM stored_results WHERE variant_id = ?', { replacements: [id], type: QueryTypes.SELECT });
+    expect(n).toBe(1);
+    const activity = await t.sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM activity_events WHERE variant_id = ? AND kind = 'analysis.stored'", { replacements: [id], type: QueryTypes.SELECT });
+    expect(activity[0].n).toBe(1);
   });
 
   it('lets reviewers read but not run (403), rejects an unknown scenario (400)', async () => {

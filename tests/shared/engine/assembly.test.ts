@@ -113,3 +113,20 @@ describe('lid placement', () => {
     expect(() => solveAssembly(withLid(0.006, W), 'run')).toThrow(/outside the lid/);
   });
 });
+
+describe('assembly: network reuse across scenarios', () => {
+  it('a scenario switch reuses the network and gives exactly the fresh answer; a moved part builds a new one (own invariant)', async () => {
+    const { lx9Model } = await import('@shared/demo/lx9');
+    const m = lx9Model('A');
+    solveAssembly(m, 'idle');
+    const reused = solveAssembly(m, 'boost');
+    const fresh = solveAssembly(m, 'boost', { cache: null });
+    expect(reused.parts.map((p) => [p.junction, p.peak])).toEqual(fresh.parts.map((p) => [p.junction, p.peak]));
+    expect(reused.influence.matrix).toEqual(fresh.influence.matrix);
+    const moved = structuredClone(m);
+    moved.parts[0].x += 0.5e-3;
+    const afterMove = solveAssembly(moved, 'boost');
+    expect(afterMove.parts.map((p) => p.junction)).toEqual(solveAssembly(moved, 'boost', { cache: null }).parts.map((p) => p.junction));
+    expect(afterMove.parts[0].junction).not.toBe(reused.parts[0].junction);
+  });
+});
