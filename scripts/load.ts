@@ -124,7 +124,9 @@ async function main(): Promise<void> {
   if (!values['no-write']) {
     writeLoadSection(path.resolve('docs/performance.md'), rows, probes, [
       '"cached": the variant and scenario were solved before, the stored result (keyed by a hash of model, scenario and engine version) is read back.',
-      '"uncached": every request names a scenario of its variant not solved before (same geometry, scaled powers), so the engine runs on a worker thread and the result is stored.',
+      '"uncached (new scenario)": every request names a scenario of its variant not solved before (same geometry, scaled powers), so the engine runs on a worker thread and the result is stored; the network (scenario-independent) is reused, as when a user switches scenario or edits powers.',
+      '"uncached (part moved)": every request solves its own copy of the demo with the first part moved by a different few micrometres, so the engine also builds and factors a new network, as after a drag on the layout.',
+      'Solve answers leave the two 128×128 plane maps out (the default; `maps: true` adds them, about 600 KB of JSON for the demo).',
       'Saves: each client saves its own variant with the version it last got back, so no save conflicts (409) arise; conflicts are by design when two people save the same variant (see docs/reliability.md).',
       'errors = connection errors + timeouts + responses that are not 2xx.',
       '"server CPU ms/req": CPU time (user + system, all threads) of the server process group during the phase divided by its requests, read from /proc — on a shared, overloaded machine it estimates what one request costs on an idle one.',

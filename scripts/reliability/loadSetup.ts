@@ -4,7 +4,7 @@ import { HttpSession } from './httpSession';
 import { copyVariant } from './demoData';
 
 /** Scenarios per load variant: each uncached solve request asks for one not solved before. */
-export const LOAD_SCENARIOS = 40;
+export const LOAD_SCENARIOS = 20;
 
 /** Sign in `count` sessions, alternating the demo engineer and owner (both may run analyses and save). */
 export async function signInSessions(url: string, count: number): Promise<HttpSession[]> {
