@@ -1,6 +1,6 @@
 /**
- * Layers and limits given to a part that a floorplan CSV adds when the base variant has no part of
- * that kind to copy from. Silicon k 148 W/m·K, ρ 2330 kg/m³, c_p 712 J/kg·K (Incropera & DeWitt,
+ * Layers and limits per part kind: given to a part that a floorplan CSV adds when the base variant has
+ * no part of that kind to copy from, and the body of the built-in part templates on the layout. Silicon k 148 W/m·K, ρ 2330 kg/m³, c_p 712 J/kg·K (Incropera & DeWitt,
  * Table A.1, 300 K); bump, bond and TIM layers are effective values from common practice; limits:
  * logic 105 °C, DRAM 85 °C with 95 °C extended (common practice / JEDEC DDR temperature ranges).
  */

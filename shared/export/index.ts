@@ -1,6 +1,6 @@
 /** Import and export formats (pure, isomorphic): CSV writers and readers, model JSON file, SPICE netlist. */
 export { toCsv, csvNumber, csvLines, csvDelimiter, cellNumber, CSV_DIGITS, type Cell, type LineIssue } from './csv';
-export { MODEL_UNITS, EXPORT_CAUTION, sourceLine, type ExportSource } from './units';
+export { MODEL_UNITS, EXPORT_CAUTION, RESULT_CAUTION, sourceLine, type ExportSource } from './units';
 export { modelFileObject, modelToJson, readModelFile, readModelObject, MAX_ISSUES, type ImportIssue, type ModelFileHeader, type ModelFileRead } from './modelJson';
 export { checkModelReferences } from './modelChecks';
 export { matrixCsv, temperaturesCsv, temperatureRows, nodeLabel, TEMPERATURE_COLUMNS, type MatrixKind } from './resultCsv';

@@ -32,7 +32,8 @@ export function readPowerMapCsv(text: string): PowerMapRead {
     if (cells.length !== nx) errors.push({ line, message: `This row has ${cells.length} values; the first row has ${nx}.` });
     const row = cells.map((c, i) => {
       const v = cellNumber(c);
-      if (v === null) errors.push({ line, column: String(i + 1), message: `Value ${i + 1} ("${c}") is not a number.` });
+      if (c.trim() === '') errors.push({ line, column: String(i + 1), message: `Value ${i + 1} is empty.` });
+      else if (v === null) errors.push({ line, column: String(i + 1), message: `Value ${i + 1} ("${c}") is not a number.` });
       else if (v < 0) errors.push({ line, column: String(i + 1), message: `Value ${i + 1} is negative (${v}); weights must be ≥ 0.` });
       return v ?? 0;
     });

@@ -17,11 +17,14 @@ export const MODEL_UNITS = {
   leakageCoefficient: '1/K',
 } as const;
 
-/** The caution every export carries (product brief, "Cautions the product shows"). */
-export const EXPORT_CAUTION =
-  'Early-stage estimate from an idealised model (homogenised layers, uniform cooling). It does not replace detailed ' +
+/** The caution shown wherever results appear (product brief, "Cautions the product shows"). */
+export const RESULT_CAUTION =
+  'Results come from an idealised model (homogenised layers, uniform cooling). They do not replace detailed ' +
   'simulation, measurement to JEDEC JESD51 methods, or the part makers\' limits. Overheated parts can fail or cause burns: ' +
   'defer to data-sheet limits, local codes and licensed practice.';
+
+/** The caution every export carries: the same words, headed as an early-stage estimate. */
+export const EXPORT_CAUTION = `Early-stage estimate. ${RESULT_CAUTION}`;
 
 /** Where an export came from, written into its header. */
 export interface ExportSource {

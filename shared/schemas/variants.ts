@@ -2,11 +2,23 @@
 import { z } from 'zod';
 import { nameSchema, noteSchema } from './common';
 import { modelSchema } from './model';
+import type { Capability } from './roles';
 
 export const variantStatuses = ['draft', 'in_review', 'approved', 'changes_requested'] as const;
 /** Review status of a variant. */
 export const variantStatusSchema = z.enum(variantStatuses);
 export type VariantStatus = z.infer<typeof variantStatusSchema>;
+
+/**
+ * Review status moves, enforced by the server and offered by the client: target status → the
+ * statuses it may come from and the capability it needs (shared/schemas/roles.ts).
+ */
+export const statusTransitions: Record<VariantStatus, { from: readonly VariantStatus[]; needs: Capability }> = {
+  in_review: { from: ['draft', 'changes_requested'], needs: 'review.request' },
+  draft: { from: ['in_review', 'changes_requested', 'approved'], needs: 'review.request' },
+  approved: { from: ['in_review'], needs: 'review.decide' },
+  changes_requested: { from: ['in_review'], needs: 'review.decide' },
+};
 
 /** POST /api/assemblies/:aid/variants body; without a model the server starts from the assembly's first variant or a blank template. */
 export const variantCreateSchema = z.object({ name: nameSchema, note: noteSchema, model: modelSchema.optional() });

@@ -1,6 +1,6 @@
 /** Review status changes and the e-mail notice they send to the workspace's owners and engineers. */
-import type { VariantDetail, VariantStatus } from '@shared/schemas/variants';
-import { can, type Capability } from '@shared/schemas/roles';
+import { statusTransitions, type VariantDetail, type VariantStatus } from '@shared/schemas/variants';
+import { can } from '@shared/schemas/roles';
 import type { AppContext } from '../../lib/context';
 import type { Access } from '../../lib/permissions';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors';
@@ -11,21 +11,13 @@ import * as repo from './variantsRepository';
 import { detail } from './variantsService';
 import { reviewMail } from './reviewMail';
 
-/** Allowed moves: target status → (statuses it may come from, capability needed). */
-export const transitions: Record<VariantStatus, { from: VariantStatus[]; needs: Capability }> = {
-  in_review: { from: ['draft', 'changes_requested'], needs: 'review.request' },
-  draft: { from: ['in_review', 'changes_requested', 'approved'], needs: 'review.request' },
-  approved: { from: ['in_review'], needs: 'review.decide' },
-  changes_requested: { from: ['in_review'], needs: 'review.decide' },
-};
-
 const labels: Record<VariantStatus, string> = {
   draft: 'draft', in_review: 'in review', approved: 'approved', changes_requested: 'changes requested',
 };
 
 /** Move a variant to `to`: checks the role (403) and the current status (409), logs activity, mails a notice. */
 export async function changeStatus(ctx: AppContext, a: Access, id: number, to: VariantStatus, message?: string): Promise<VariantDetail> {
-  const rule = transitions[to];
+  const rule = statusTransitions[to];
   if (!can(a.role, rule.needs)) throw new ForbiddenError(`A ${a.role} may not set a variant to "${labels[to]}".`, { capability: rule.needs, role: a.role });
   const v = await repo.findVariant(id);
   if (!v) throw new NotFoundError('Variant');

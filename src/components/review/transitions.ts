@@ -1,9 +1,9 @@
 /**
- * Review status moves a role may make from a status. Mirrors the server's table
- * (server/api/variants/reviewService.ts `transitions`), checked with the shared `can()`.
+ * Review status moves a role may make from a status: the table the server enforces
+ * (`statusTransitions` in shared/schemas/variants.ts), checked with the shared `can()`, plus button words.
  */
-import { can, type Capability, type Role } from '@shared/schemas/roles';
-import type { VariantStatus } from '@shared/schemas/variants';
+import { can, type Role } from '@shared/schemas/roles';
+import { statusTransitions, type VariantStatus } from '@shared/schemas/variants';
 
 /** One allowed move, with the words on its button. */
 export interface StatusMove {
@@ -15,25 +15,19 @@ export interface StatusMove {
   asksMessage: boolean;
 }
 
-interface Rule {
-  from: readonly VariantStatus[];
-  needs: Capability;
-  label: (from: VariantStatus) => string;
-  kind: StatusMove['kind'];
-}
-
-const rules: Record<VariantStatus, Rule> = {
-  in_review: { from: ['draft', 'changes_requested'], needs: 'review.request', label: (f) => (f === 'draft' ? 'Request review' : 'Request review again'), kind: 'primary' },
-  approved: { from: ['in_review'], needs: 'review.decide', label: () => 'Approve', kind: 'success' },
-  changes_requested: { from: ['in_review'], needs: 'review.decide', label: () => 'Request changes', kind: 'warning' },
-  draft: { from: ['in_review', 'changes_requested', 'approved'], needs: 'review.request', label: (f) => (f === 'in_review' ? 'Withdraw the request' : 'Back to draft'), kind: 'default' },
+/** Button words and emphasis per target status, in button order. */
+const buttons: Record<VariantStatus, { label: (from: VariantStatus) => string; kind: StatusMove['kind'] }> = {
+  in_review: { label: (f) => (f === 'draft' ? 'Request review' : 'Request review again'), kind: 'primary' },
+  approved: { label: () => 'Approve', kind: 'success' },
+  changes_requested: { label: () => 'Request changes', kind: 'warning' },
+  draft: { label: (f) => (f === 'in_review' ? 'Withdraw the request' : 'Back to draft'), kind: 'default' },
 };
 
 /** Moves `role` may make from `status`, in button order. */
 export function statusMoves(role: Role | null | undefined, status: VariantStatus): StatusMove[] {
-  return (Object.keys(rules) as VariantStatus[])
-    .filter((to) => rules[to].from.includes(status) && can(role, rules[to].needs))
-    .map((to) => ({ to, label: rules[to].label(status), kind: rules[to].kind, asksMessage: to !== 'draft' }));
+  return (Object.keys(buttons) as VariantStatus[])
+    .filter((to) => statusTransitions[to].from.includes(status) && can(role, statusTransitions[to].needs))
+    .map((to) => ({ to, label: buttons[to].label(status), kind: buttons[to].kind, asksMessage: to !== 'draft' }));
 }
 
 /** One line on what the current status means and who acts next. */

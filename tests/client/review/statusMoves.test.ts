@@ -12,7 +12,7 @@ vi.mock('@/api/review', () => ({ changeStatus: (...a: unknown[]) => changeStatus
 
 const targets = (role: Role | null, from: VariantStatus) => statusMoves(role, from).map((m) => m.to);
 
-describe('statusMoves (mirrors the server table in reviewService.ts)', () => {
+describe('statusMoves (the shared table the server enforces, shared/schemas/variants.ts)', () => {
   test('engineer: asks for review and withdraws it, never decides', () => {
     expect(targets('engineer', 'draft')).toEqual(['in_review']);
     expect(targets('engineer', 'in_review')).toEqual(['draft']);
