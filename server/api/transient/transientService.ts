@@ -58,5 +58,6 @@ export async function variantTiming(a: Access, id: number, body: TimingRequest):
   if (!v.model.parts.some((p) => p.id === body.partId)) throw new ValidationError([{ path: 'partId', message: `no part "${body.partId}" in this variant` }]);
   if (body.startFrom && body.startFrom !== 'ambient') scenarioOf(v.model, body.startFrom);
   const request = { ...body, scenarioId };
-  return storedOrRun(a, id, 'transient-timing', request, (model) => ({ kind: 'timing', model, request }), `timing answers for "${body.partId}"`);
+  // `meaning` 2: the others rest at the start scenario's powers (as on the Timeline screen); answers stored under meaning 1 are not reused.
+  return storedOrRun(a, id, 'transient-timing', { ...request, meaning: 2 }, (model) => ({ kind: 'timing', model, request }), `timing answers for "${body.partId}"`);
 }

@@ -86,18 +86,23 @@ export function sourceLaws(mt: ModelTransient, model: Model, scenario: Scenario)
   });
 }
 
-/** What to ask about one part of a model. */
+/**
+ * What to ask about one part of a model. While boosting, the part runs at `boostPower` and every other
+ * part at its power in `scenarioId`; while resting, the part runs at `restPower` and the others at their
+ * powers in the start scenario (`startFrom`; all off for 'ambient'); the run starts from the steady
+ * state of that resting state. The Timeline screen builds the same request (src/components/timeline/timingRequest.ts).
+ */
 export interface PartTimingRequest {
   partId: string;
-  /** Scenario giving every other part's power (and the part's rest power). */
+  /** Scenario giving every other part's power while the part boosts (default: the model's first). */
   scenarioId?: string;
   boostPower: number;
-  /** Default: the part's power in the scenario. */
+  /** Default: the part's power in the start scenario (0 W from ambient). */
   restPower?: number;
   /** Default: the part's junction limit. */
   limit?: number;
   reenable?: number;
-  /** 'ambient' or a scenario id whose steady state is the start (default: the scenario itself = "idle" at rest power). */
+  /** 'ambient' or a scenario id: the resting powers and, at rest, the start state (default: `scenarioId` itself). */
   startFrom?: string;
   period?: number;
 }
@@ -108,12 +113,14 @@ export function modelTimingAnswers(mt: ModelTransient, model: Model, req: PartTi
   if (p < 0) throw new EngineInputError('partId', `There is no part "${req.partId}" in this model.`);
   const { scenario } = findScenario(model, req.scenarioId);
   const source = mt.impedance.sourceList.findIndex((s) => s.part === p && s.kind === 'junction');
-  const rest = scenarioSourcePowers(mt, model, scenario);
-  if (req.restPower !== undefined) rest[source] = req.restPower;
-  const boost = rest.map((w, i) => (i === source ? req.boostPower : w));
   const from = req.startFrom ?? scenario.id;
-  const start = from === 'ambient' ? 'ambient' : { steadyPower: from === scenario.id ? rest : scenarioSourcePowers(mt, model, findScenario(model, from).scenario) };
-  const startLabel = from === 'ambient' ? 'from ambient' : `from ${findScenario(model, from).scenario.name.toLowerCase()}`;
+  const startScenario = from === 'ambient' ? null : findScenario(model, from).scenario;
+  const on = scenarioSourcePowers(mt, model, scenario);
+  const rest = startScenario ? scenarioSourcePowers(mt, model, startScenario) : on.map(() => 0);
+  if (req.restPower !== undefined) rest[source] = req.restPower;
+  const boost = on.map((w, i) => (i === source ? req.boostPower : w));
+  const start = startScenario ? { steadyPower: rest } : ('ambient' as const);
+  const startLabel = startScenario ? `from ${startScenario.name.toLowerCase()}` : 'from ambient';
   return timingAnswers(mt.fit.network, mt.baseTemperatures, {
     node: mt.impedance.sourceNodes[source],
     limit: req.limit ?? model.parts[p].limits.junction,

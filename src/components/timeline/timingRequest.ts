@@ -1,7 +1,8 @@
 /**
- * Timing-answer inputs → the engine's request (transient/timingAnswers.ts). The chosen part runs at the
- * boost power with the other parts at the selected scenario's powers; while resting it drops to the rest
- * power with the others at the start scenario's powers; the start state is that scenario's steady state.
+ * Timing-answer inputs → the engine's request (transient/timingAnswers.ts), with the meaning the
+ * stored route uses too (`modelTimingAnswers`): the chosen part runs at the boost power with the other
+ * parts at the selected scenario's powers; while resting it drops to the rest power with the others at
+ * the start scenario's powers; the start state is the steady state of that resting state.
  * Optionally every part's leakage and Joule heat are added as evaluated at its own limit temperature: a
  * fixed-power bound that is conservative while the part stays below its limit (physics.md §4 power law).
  */
@@ -66,7 +67,7 @@ export function timingRequest(model: Model, scenarioId: string, inputs: TimingIn
       reenable: reenable ?? undefined,
       boostPower: on,
       restPower: off,
-      start: start ? { steadyPower: base } : 'ambient',
+      start: start ? { steadyPower: off } : 'ambient',
       startLabel: start ? `from ${start.name.toLowerCase()}` : 'from ambient',
       period: periodMs === null ? undefined : periodMs / 1e3,
       limits,

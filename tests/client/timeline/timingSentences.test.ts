@@ -2,10 +2,11 @@
 /** Timing answers as sentences: numbers from a lumped one-node network, set in bold; input checks of the request builder. */
 import { describe, expect, test } from 'vitest';
 import { mount } from '@vue/test-utils';
-import { timingAnswers, type FosterNetwork } from '@shared/engine/transient';
+import { modelTimingAnswers, prepareModelTransient, timingAnswers, type FosterNetwork } from '@shared/engine/transient';
 import { lx9Model } from '@shared/demo/lx9';
 import TimingSentences from '@/components/timeline/TimingSentences.vue';
 import { defaultTimingInputs, timingRequest } from '@/components/timeline/timingRequest';
+import { timelineNodes } from '@/components/timeline/nodes';
 import { expectClose } from '../../helpers/float';
 
 /** One lumped node: R = 0.5 K/W, τ = RC = 0.1 s, fluid 40 °C (invented numbers). */
@@ -70,5 +71,24 @@ describe('timingRequest', () => {
     expect(timingRequest(model, 'boost', { ...inputs, reenable: 110 })).toEqual({ ok: false, message: 'The re-enable temperature must be below the limit (105 °C).' });
     expect(timingRequest(model, 'boost', { ...inputs, boostPower: -1 })).toEqual({ ok: false, message: 'Enter a boost power of 0 W or more.' });
     expect(timingRequest(model, 'boost', { ...inputs, periodMs: 0 })).toEqual({ ok: false, message: 'The period must be longer than 0 ms.' });
+  });
+});
+
+describe('timing answers: Timeline screen and stored route agree', () => {
+  test('same request meaning: boost over the scenario, rest over the start scenario, start at the resting steady state (own invariant)', () => {
+    const model = lx9Model('A');
+    const mt = prepareModelTransient(model, { count: 40 });
+    const partId = model.parts[0].id;
+    const node = timelineNodes(model).findIndex((n) => n.partId === partId);
+    for (const startFrom of ['idle', 'ambient']) {
+      const inputs = { ...defaultTimingInputs(model, 'boost', node, startFrom), boostPower: 170, restPower: 20, limit: 100, reenable: 90, periodMs: 100, withLeakage: false };
+      const built = timingRequest(model, 'boost', inputs);
+      if (!built.ok) throw new Error(built.message);
+      const screen = timingAnswers(mt.fit.network, mt.baseTemperatures, built.request);
+      const route = modelTimingAnswers(mt, model, { partId, scenarioId: 'boost', boostPower: 170, restPower: 20, limit: 100, reenable: 90, startFrom, period: 0.1 });
+      expectClose(screen.boost.time!, route.boost.time!, 1e-9, 0, `time to limit from ${startFrom}`);
+      expectClose(screen.rest!.time!, route.rest!.time!, 1e-9, 0, `rest time from ${startFrom}`);
+      expect(screen.boost.sentence).toBe(route.boost.sentence);
+    }
   });
 });
