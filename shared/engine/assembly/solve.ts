@@ -28,23 +28,27 @@ export interface AssemblyOptions {
 export const ASSEMBLY_MAP_SIZE = 128;
 
 /**
- * The last few networks built with the shared impedance cache, by everything but the scenarios: the
- * network does not depend on loads, so switching scenario or editing powers skips building and factoring it.
+ * The last few networks built with each impedance cache, by everything but the scenarios: the network
+ * does not depend on loads, so switching scenario or editing powers skips building and factoring it.
+ * `cache: null` (no caching) always builds afresh.
  */
 const NETWORK_MEMO_SIZE = 4;
-const networkMemo = new Map<string, AssemblyNetwork>();
+const networkMemos = new WeakMap<ImpedanceCache, Map<string, AssemblyNetwork>>();
 
 function memoNetwork(model: Model, options: AssemblyOptions): AssemblyNetwork {
-  if (options.cache !== undefined) return assemblyNetwork(model, { truncation: options.truncation, cache: options.cache });
+  if (options.cache === null) return assemblyNetwork(model, { truncation: options.truncation, cache: null });
+  const cache = options.cache ?? defaultImpedanceCache;
+  let memo = networkMemos.get(cache);
+  if (!memo) networkMemos.set(cache, (memo = new Map()));
   const key = JSON.stringify({ ...model, scenarios: null, truncation: options.truncation ?? null });
-  let net = networkMemo.get(key);
+  let net = memo.get(key);
   if (net) {
-    networkMemo.delete(key);
+    memo.delete(key);
   } else {
-    net = assemblyNetwork(model, { truncation: options.truncation });
-    if (networkMemo.size >= NETWORK_MEMO_SIZE) networkMemo.delete(networkMemo.keys().next().value!);
+    net = assemblyNetwork(model, { truncation: options.truncation, cache });
+    if (memo.size >= NETWORK_MEMO_SIZE) memo.delete(memo.keys().next().value!);
   }
-  networkMemo.set(key, net);
+  memo.set(key, net);
   return net;
 }
 
