@@ -2,6 +2,8 @@
 import { solveAssembly, solveChannelBody } from '@shared/engine';
 import { EngineInputError } from '@shared/engine/errors';
 import { assemblyImpedance, modelTimingAnswers, prepareModelTransient, scenarioTimeline } from '@shared/engine/transient';
+import { writeNetlist } from '@shared/export';
+import { netlistModel } from '../api/io/netlistModel';
 import type { AssemblyTexts, EngineTask, ProgressMessage, TaskOutcome } from './taskTypes';
 
 /** Minimum change of the fraction between two progress messages (keeps the port quiet). */
@@ -13,6 +15,10 @@ function compute(task: EngineTask): unknown {
     return { summary: JSON.stringify(summary), maps: task.maps ? JSON.stringify(maps) : null } satisfies AssemblyTexts;
   }
   if (task.kind === 'channel') return solveChannelBody(task.body);
+  if (task.kind === 'netlist') {
+    const result = solveAssembly(task.model, task.scenarioId);
+    return writeNetlist(netlistModel(task.model, result, task.netlist), { source: task.source });
+  }
   if (task.kind === 'timeline') return scenarioTimeline(prepareModelTransient(task.model), task.model, task.scenarioId, { feedback: task.feedback });
   if (task.kind === 'timing') return modelTimingAnswers(prepareModelTransient(task.model), task.model, task.request);
   let last = -1;

@@ -3,11 +3,14 @@ import type { Model } from '@shared/schemas/model';
 import type { InputIssue } from '@shared/engine/errors';
 import type { PartTimingRequest } from '@shared/engine/transient';
 import type { MessagePort } from 'node:worker_threads';
+import type { ExportSource } from '@shared/export/units';
+import type { NetlistKind } from '../api/io/netlistModel';
 
 /** One unit of engine work for a worker thread. */
 export type EngineTask =
   | { kind: 'assembly'; model: Model; scenarioId: string; maps: boolean }
   | { kind: 'channel'; body: unknown }
+  | { kind: 'netlist'; model: Model; scenarioId?: string; netlist: NetlistKind; source: ExportSource }
   | { kind: 'impedance'; model: Model; count: number; port?: MessagePort }
   | { kind: 'timeline'; model: Model; scenarioId: string; feedback: boolean }
   | { kind: 'timing'; model: Model; request: PartTimingRequest };

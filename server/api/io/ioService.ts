@@ -1,22 +1,18 @@
 /** Import/export logic: solves for the CSV and netlist exports, validation of imports before anything is saved. */
-import { solveAssembly } from '@shared/engine/assembly/solve';
 import type { AssemblyResult } from '@shared/engine/assembly/result';
-import { ImpedanceCache } from '@shared/engine/cache';
 import { EngineInputError } from '@shared/engine/errors';
-import type { Model } from '@shared/schemas/model';
 import {
-  floorplanToModel, matrixCsv, modelToJson, readFloorplanCsv, readModelFile, readModelObject, temperaturesCsv, writeNetlist,
+  floorplanToModel, matrixCsv, modelToJson, readFloorplanCsv, readModelFile, readModelObject, temperaturesCsv,
   type MatrixKind,
 } from '@shared/export';
 import type { VariantDetail } from '@shared/schemas/variants';
 import type { Access } from '../../lib/permissions';
 import { NotFoundError, ValidationError } from '../../lib/errors';
 import * as variantsService from '../variants/variantsService';
+import { resultForExport } from '../solve/solveService';
+import { runEngineTask } from '../../lib/workerPool';
 import * as repo from './ioRepository';
-import { netlistModel, type NetlistKind } from './netlistModel';
-
-/** Map side used for export solves (maps are not exported; the smallest sensible grid). */
-const EXPORT_MAP_SIZE = 16;
+import type { NetlistKind } from './netlistModel';
 
 async function stored(id: number): Promise<repo.StoredVariant> {
   const v = await repo.loadVariant(id);
@@ -24,13 +20,19 @@ async function stored(id: number): Promise<repo.StoredVariant> {
   return v;
 }
 
-function solve(model: Model, scenario: string | undefined, cache: ImpedanceCache): AssemblyResult {
+/** Run an export's engine work (on the worker pool); engine input errors become 400 validation errors naming the fields. */
+async function engine<T>(run: () => Promise<T>): Promise<T> {
   try {
-    return solveAssembly(model, scenario, { mapSize: EXPORT_MAP_SIZE, cache });
+    return await run();
   } catch (e) {
     if (e instanceof EngineInputError) throw new ValidationError(e.issues.map((i) => ({ path: i.path, message: i.message })), e.message);
     throw e;
   }
+}
+
+/** One scenario's result for an export: the stored solve when there is one, else computed off the HTTP thread. */
+function solve(v: repo.StoredVariant, scenario: string | undefined): Promise<AssemblyResult> {
+  return engine(() => resultForExport(v.id, v.model, scenario));
 }
 
 /** A file name stem from the variant's name: lower case letters, digits and dashes. */
@@ -47,27 +49,21 @@ export async function modelFile(id: number): Promise<{ stem: string; body: strin
 /** A matrix CSV of one scenario (the first when absent). */
 export async function matrixFile(id: number, kind: MatrixKind, scenario?: string): Promise<{ stem: string; body: string }> {
   const v = await stored(id);
-  return { stem: fileStem(v), body: matrixCsv(solve(v.model, scenario, new ImpedanceCache()), kind) };
+  return { stem: fileStem(v), body: matrixCsv(await solve(v, scenario), kind) };
 }
 
 /** The temperature table of one scenario, or of every scenario when absent. */
 export async function temperaturesFile(id: number, scenario?: string): Promise<{ stem: string; body: string }> {
   const v = await stored(id);
-  const cache = new ImpedanceCache();
   const ids = scenario ? [scenario] : v.model.scenarios.map((s) => s.id);
-  return { stem: fileStem(v), body: temperaturesCsv(ids.map((s) => solve(v.model, s, cache))) };
+  return { stem: fileStem(v), body: temperaturesCsv(await Promise.all(ids.map((s) => solve(v, s)))) };
 }
 
 /** The SPICE netlist of the compact model for one scenario: Foster network when the transient exists (kind auto), else the steady matrix. */
 export async function netlistFile(id: number, scenario: string | undefined, kind: NetlistKind): Promise<{ stem: string; body: string }> {
   const v = await stored(id);
-  const result = solve(v.model, scenario, new ImpedanceCache());
-  try {
-    return { stem: fileStem(v), body: writeNetlist(netlistModel(v.model, result, kind), { source: v.source }) };
-  } catch (e) {
-    if (e instanceof EngineInputError) throw new ValidationError(e.issues.map((i) => ({ path: i.path, message: i.message })), e.message);
-    throw e;
-  }
+  const body = await engine(() => runEngineTask<string>({ kind: 'netlist', model: v.model, scenarioId: scenario, netlist: kind, source: v.source }));
+  return { stem: fileStem(v), body };
 }
 
 function issuesError(issues: { path: string; message: string }[], what: string): ValidationError {

@@ -1,4 +1,5 @@
 /** Stored analyses: solve one scenario of a variant's current model once per (model, scenario, engine version). */
+import type { AssemblyResult } from '@shared/engine/assembly/result';
 import type { Model } from '@shared/schemas/model';
 import type { StoredResult } from '@shared/schemas/solve';
 import pkg from '../../../package.json';
@@ -114,6 +115,18 @@ export async function solveVariant(a: Access, id: number, scenarioId?: string, w
     resultJson: fresh.summary,
     mapsJson: withMaps ? fresh.maps : null,
   };
+}
+
+/**
+ * A scenario's result without plane maps, for exports: the stored one when this model and scenario were
+ * solved before (so exports and solve answers agree to the last digit), else computed on a worker thread
+ * and not stored (an export needs only read access; storing is for those who run analyses).
+ */
+export async function resultForExport(id: number, model: Model, scenarioId?: string): Promise<AssemblyResult> {
+  const sid = scenarioOf(model, scenarioId);
+  const stored = await repo.findResultText(id, ASSEMBLY_KIND, inputHash(model, sid), false);
+  const text = stored?.text ?? (await runEngineTask<AssemblyTexts>({ kind: 'assembly', model, scenarioId: sid, maps: false })).summary;
+  return { ...(JSON.parse(text) as Omit<AssemblyResult, 'maps'>), maps: null } as unknown as AssemblyResult;
 }
 
 /** The stored result for the variant's current version (plane maps only when `withMaps`), or 404 when it has not been solved. */

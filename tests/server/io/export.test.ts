@@ -65,6 +65,20 @@ describe('exports', () => {
     expect(bad.body.error.message).toMatch(/no scenario "nope"/);
   });
 
+  it('temperatures CSV agrees with the solve answer to the written digits, and an export stores nothing (own invariant)', async () => {
+    const id = await f.freshVariant();
+    const before = await reviewer.get(`/api/variants/${id}/export/temperatures.csv?scenario=boost`);
+    expect((await reviewer.get(`/api/variants/${id}/results?scenarioId=boost`)).status).toBe(404);
+    const solved = (await engineer.post(`/api/variants/${id}/solve`, { scenarioId: 'boost' })).body.result;
+    const after = await reviewer.get(`/api/variants/${id}/export/temperatures.csv?scenario=boost`);
+    expect(after.text).toBe(before.text);
+    const rows = Papa.parse<string[]>(after.text.trimEnd()).data;
+    const header = rows[0];
+    const peakCol = header.findIndex((h) => h.startsWith('hot spot'));
+    const first = rows.find((r) => r[1] === solved.parts[0].id || r[2] === solved.parts[0].name)!;
+    expect(Number(first[peakCol])).toBe(Number(solved.parts[0].peak.toPrecision(10)));
+  });
+
   it('netlist: a SPICE text file with units and caution', async () => {
     const res = await reviewer.get(`/api/variants/${f.vid}/export/netlist.cir?scenario=boost`);
     expect(res.status).toBe(200);
