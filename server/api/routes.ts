@@ -5,6 +5,7 @@ import { authRouter } from './auth/authRouter';
 import { outboxRouter } from './outbox/outboxRouter';
 import { workspacesRouter } from './workspaces/workspacesRouter';
 import { invitationsRouter } from './invitations/invitationsRouter';
+import { passwordResetRouter } from './passwordReset/passwordResetRouter';
 import { projectsRouter } from './projects/projectsRouter';
 import { assembliesRouter } from './assemblies/assembliesRouter';
 import { variantsRouter } from './variants/variantsRouter';
@@ -22,6 +23,7 @@ export function apiRoutes(ctx: AppContext): Router {
   const r = Router();
   r.use(healthRouter());
   r.use('/auth', authRouter(ctx));
+  r.use(passwordResetRouter(ctx));
   r.use(workspacesRouter());
   r.use(invitationsRouter(ctx));
   r.use(outboxRouter());

@@ -54,5 +54,7 @@ export async function jsonRoutes(f: Fixture): Promise<JsonRoute[]> {
     { route: 'POST /solve/channel', method: 'post', path: '/api/solve/channel', valid: channel },
     { route: 'POST /variants/:vid/solve', method: 'post', path: `/api/variants/${vid}/solve`, valid: { scenarioId: 'nope' } },
     { route: 'POST /variants/:vid/jobs', method: 'post', path: `/api/variants/${vid}/jobs`, valid: { kind: 'impedance', count: 5 } },
+    { route: 'POST /auth/password-reset', method: 'post', path: '/api/auth/password-reset', valid: { email: 'no.account@larkspur.example' } },
+    { route: 'POST /auth/password-reset/:token', method: 'post', path: '/api/auth/password-reset/not-a-real-token-at-all', valid: { password: 'long-enough-pass' } },
   ];
 }

@@ -12,6 +12,8 @@ import { createUser, demoFixture, type Fixture } from '../server/helpers/fixture
 const PUBLIC = new Set([
   'GET /health', 'GET /auth/csrf', 'GET /auth/setup', 'POST /auth/setup', 'POST /auth/login', 'POST /auth/logout',
   'GET /invitations/:token', 'POST /invitations/:token/accept',
+  // password reset: whoever forgot their password is signed out; the e-mailed single-use token is the credential
+  'POST /auth/password-reset', 'GET /auth/password-reset/:token', 'POST /auth/password-reset/:token',
 ]);
 
 interface Layer { route?: { path: string; methods: Record<string, boolean> }; handle: { stack?: Layer[] }; rawPath?: unknown }

@@ -1,4 +1,4 @@
-/** Account models: user, workspace, membership, invitation. */
+/** Account models: user, workspace, membership, invitation, password reset. */
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 
@@ -44,6 +44,17 @@ export class InvitationModel extends Model<InferAttributes<InvitationModel>, Inf
   declare updatedAt: CreationOptional<Date>;
 }
 
+/** An e-mailed password-reset link; only the SHA-256 of its token is stored. */
+export class PasswordResetModel extends Model<InferAttributes<PasswordResetModel>, InferCreationAttributes<PasswordResetModel>> {
+  declare id: CreationOptional<number>;
+  declare userId: number;
+  declare tokenHash: string;
+  declare expiresAt: Date;
+  declare usedAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
 const id = { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true };
 const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE };
 
@@ -65,7 +76,12 @@ export function initAccountModels(sequelize: Sequelize): void {
     },
     { sequelize, tableName: 'invitations' },
   );
+  PasswordResetModel.init(
+    { id, userId: DataTypes.INTEGER, tokenHash: DataTypes.STRING, expiresAt: DataTypes.DATE, usedAt: DataTypes.DATE, ...stamps },
+    { sequelize, tableName: 'password_resets' },
+  );
   MembershipModel.belongsTo(UserModel, { foreignKey: 'userId', as: 'user' });
   MembershipModel.belongsTo(WorkspaceModel, { foreignKey: 'workspaceId', as: 'workspace' });
   InvitationModel.belongsTo(UserModel, { foreignKey: 'invitedById', as: 'invitedBy' });
+  PasswordResetModel.belongsTo(UserModel, { foreignKey: 'userId', as: 'user' });
 }
