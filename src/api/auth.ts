@@ -1,4 +1,4 @@
-/** Sign-in, sign-out, first-owner set-up and invitations. */
+/** Sign-in, sign-out, first-owner set-up, invitations and password reset. */
 import { http, resetCsrf } from './http';
 import type { Me, Role } from './types';
 
@@ -32,5 +32,17 @@ export const fetchInvitation = (token: string) =>
 /** Accept an invitation: set name and password, join, and be signed in. */
 export async function acceptInvitation(token: string, body: { name: string; password: string }) {
   await http.post(`/api/invitations/${encodeURIComponent(token)}/accept`, body);
+  resetCsrf();
+}
+
+/** Ask for a password-reset link by e-mail; the answer is the same whether or not an account uses the address. */
+export const requestPasswordReset = (email: string) => http.post<{ message: string }>('/api/auth/password-reset', { email });
+
+/** Public look-up of a password-reset link: whose password it sets (404 when unknown, used or expired). */
+export const fetchPasswordReset = (token: string) => http.get<{ email: string }>(`/api/auth/password-reset/${encodeURIComponent(token)}`);
+
+/** Set a new password with a reset link; every session of that account ends (this one's CSRF token too). */
+export async function resetPassword(token: string, password: string): Promise<void> {
+  await http.post(`/api/auth/password-reset/${encodeURIComponent(token)}`, { password });
   resetCsrf();
 }

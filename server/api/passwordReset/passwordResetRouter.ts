@@ -4,7 +4,6 @@ import { z } from 'zod';
 import { PASSWORD_RESET_REQUESTED, passwordResetRequestSchema, passwordResetSchema } from '@shared/schemas/passwordReset';
 import type { AppContext } from '../../lib/context';
 import { validate } from '../../lib/validate';
-import { NotFoundError } from '../../lib/errors';
 import { credentialLimiter, requestLimiter } from '../../lib/rateLimits';
 import * as service from './passwordResetService';
 
@@ -12,7 +11,7 @@ const tokenSchema = z.string().min(20).max(100).regex(/^[A-Za-z0-9_-]+$/);
 
 function token(raw: unknown): string {
   const r = tokenSchema.safeParse(raw);
-  if (!r.success) throw new NotFoundError('Reset link');
+  if (!r.success) throw service.linkGone();
   return r.data;
 }
 

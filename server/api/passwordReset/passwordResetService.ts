@@ -3,7 +3,7 @@ import type { PasswordResetInput, PasswordResetPublic } from '@shared/schemas/pa
 import type { AppContext } from '../../lib/context';
 import { randomToken, sha256 } from '../../lib/tokens';
 import { hashPassword } from '../../lib/password';
-import { NotFoundError } from '../../lib/errors';
+import { AppError } from '../../lib/errors';
 import * as authRepo from '../auth/authRepository';
 import * as repo from './passwordResetRepository';
 import { passwordResetMail } from './passwordResetMail';
@@ -11,7 +11,8 @@ import { passwordResetMail } from './passwordResetMail';
 /** How long a reset link stays valid. */
 export const RESET_TTL_MS = 3600 * 1000;
 
-const LINK = 'Reset link';
+/** 404 for a link that is unknown, used, replaced by a newer one or expired (one answer for all). */
+export const linkGone = (): AppError => new AppError(404, 'not_found', 'This reset link is unknown, used or expired. Ask for a new one.');
 
 /**
  * Mail a reset link when an account uses `email`; nothing otherwise. The link's mail is personal: it
@@ -33,18 +34,18 @@ export async function requestReset(ctx: AppContext, email: string): Promise<void
 /** Whose password an open link sets; 404 when unknown, used or expired. */
 export async function lookup(token: string): Promise<PasswordResetPublic> {
   const open = await repo.findOpen(sha256(token), new Date());
-  if (!open) throw new NotFoundError(LINK);
+  if (!open) throw linkGone();
   return { email: open.email };
 }
 
 /** Set the new password (the link is used exactly once) and end every session of that user. */
 export async function reset(ctx: AppContext, token: string, input: PasswordResetInput): Promise<void> {
   const tokenHash = sha256(token);
-  if (!(await repo.findOpen(tokenHash, new Date()))) throw new NotFoundError(LINK);
+  if (!(await repo.findOpen(tokenHash, new Date()))) throw linkGone();
   const passwordHash = await hashPassword(input.password, ctx.config.argon2);
   const userId = await authRepo.inTransaction(async (t) => {
     const open = await repo.findOpen(tokenHash, new Date(), t);
-    if (!open || !(await repo.markUsed(open.id, new Date(), t))) throw new NotFoundError(LINK);
+    if (!open || !(await repo.markUsed(open.id, new Date(), t))) throw linkGone();
     await repo.setPasswordHash(open.userId, passwordHash, t);
     return open.userId;
   });
