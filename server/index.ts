@@ -12,7 +12,7 @@ async function main(): Promise<void> {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
     logger.info(`Heatloom is running at http://${shown}:${port} (data in ${config.dataDir})`);
-    if (built.fakeSmtpPort !== null) logger.info(`Local SMTP server on port ${built.fakeSmtpPort}; owners read its outbox in the app.`);
+    if (built.fakeSmtpPort !== null) logger.info(`Local SMTP server on port ${built.fakeSmtpPort}; owners read workspace mail in the Outbox page, personal mail (password resets) with: npm run -s cli -- mail --to ADDRESS`);
     logger.info(`Demo sign-in: ${demoUsers.engineer.email} / ${demoUsers.engineer.password} (see README for the other demo users)`);
   });
   server.on('error', (err) => {
