@@ -22,6 +22,7 @@ import { seedDemoIfEmpty } from './db/seeders/demoSeed';
 import { storeReceivedMail } from './api/outbox/outboxRepository';
 import { apiRoutes } from './api/routes';
 import { closePool, configurePool } from './lib/workerPool';
+import { limitBodyDepth } from './lib/bodyDepth';
 import { assertWritableDataDir, storageErrors } from './lib/storageErrors';
 
 /** A built app with its resources; `close` releases them (server sockets are the caller's). */
@@ -68,6 +69,7 @@ export async function createApp(config: Config): Promise<BuiltApp> {
     next();
   });
   app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', limitBodyDepth());
   app.use(
     '/api',
     session({

@@ -43,6 +43,18 @@ describe('POST /api/solve/channel', () => {
   });
 });
 
+describe('deeply nested bodies', () => {
+  it('answers 400 for a body nested thousands of levels deep (not 5xx from a stack overflow), on the channel route and elsewhere', async () => {
+    const deep = '['.repeat(5000) + ']'.repeat(5000);
+    const raw = (url: string, text: string) => engineer.agent.post(url).set('x-csrf-token', engineer.token).set('content-type', 'application/json').send(text);
+    const channelRes = await raw('/api/solve/channel', JSON.stringify(channel).replace(/"sources":\[.*\]\}$/, `"sources":${deep}}`));
+    expect(channelRes.status).toBe(400);
+    expect(channelRes.body.error.message).toMatch(/nested more than 32 levels/);
+    expect((await raw(`/api/variants/${f.vid}/solve`, `{"scenarioId":${deep}}`)).status).toBe(400);
+    expect((await engineer.post('/api/solve/channel', channel)).status).toBe(200);
+  });
+});
+
 describe('POST /api/variants/:vid/solve', () => {
   it('solves once per unchanged model and scenario, then reuses the stored result', async () => {
     const id = await f.freshVariant();
