@@ -108,7 +108,9 @@ export function solveFv(p: FvProblem, tolerance = 1e-10, maxIterations = 20000):
       }
     }
   }
-  const { x, iterations, residual } = conjugateGradient(apply, diag, b, tolerance, maxIterations);
+  const { x, iterations, residual } = pcg(apply, (r, z) => {
+    for (let i = 0; i < r.length; i++) z[i] = r[i] / diag[i];
+  }, b, tolerance, maxIterations);
   const meanRise = p.sources.map((s) => {
     let sum = 0;
     for (let j = 0; j < ny; j++) {
@@ -125,12 +127,14 @@ export function solveFv(p: FvProblem, tolerance = 1e-10, maxIterations = 20000):
   return { meanRise, iterations, residual };
 }
 
-function conjugateGradient(
+/** Preconditioned conjugate gradients (Saad 2003, alg. 9.1); `precondition(r, z)` writes z = M⁻¹r. */
+export function pcg(
   apply: (v: Float64Array, out: Float64Array) => void,
-  diag: Float64Array,
+  precondition: (r: Float64Array, z: Float64Array) => void,
   b: Float64Array,
   tolerance: number,
   maxIterations: number,
+  who = 'solveFv',
 ): { x: Float64Array; iterations: number; residual: number } {
   const n = b.length;
   const x = new Float64Array(n);
@@ -142,7 +146,7 @@ function conjugateGradient(
     for (let i = 0; i < n; i++) s += u[i] * v[i];
     return s;
   };
-  for (let i = 0; i < n; i++) z[i] = r[i] / diag[i];
+  precondition(r, z);
   const d = Float64Array.from(z);
   let rz = dot(r, z);
   const bNorm = Math.sqrt(dot(b, b));
@@ -155,11 +159,12 @@ function conjugateGradient(
     }
     const residual = Math.sqrt(dot(r, r)) / bNorm;
     if (residual < tolerance) return { x, iterations: it, residual };
-    for (let i = 0; i < n; i++) z[i] = r[i] / diag[i];
+    precondition(r, z);
     const rzNew = dot(r, z);
     const beta = rzNew / rz;
     rz = rzNew;
     for (let i = 0; i < n; i++) d[i] = z[i] + beta * d[i];
   }
-  throw new Error(`solveFv: conjugate gradients did not converge in ${maxIterations} iterations`);
+  throw new Error(`${who}: conjugate gradients did not converge in ${maxIterations} iterations`);
 }
+

@@ -18,6 +18,7 @@
  * Thomas solve per grid column): the thin, stiff layers make the z couplings dominate, which plain Jacobi
  * handles poorly.
  */
+import { pcg } from './fv';
 import { modelSchema, type Model, type ModelInput, type Part, type PartLoad } from '../../../shared/schemas/model';
 import { lidOrigin, partGeometries } from '../../../shared/engine/assembly/geometry';
 
@@ -273,7 +274,7 @@ export function solveFvAssembly(p: FvAssemblyProblem, grid: FvGridOptions, toler
       }
     }
   };
-  const { x, iterations, residual } = pcg(apply, precondition, b, tolerance, maxIterations);
+  const { x, iterations, residual } = pcg(apply, precondition, b, tolerance, maxIterations, 'solveFvAssembly');
 
   const probe = p.probes.map((f) => {
     let sum = 0;
@@ -307,45 +308,6 @@ export function solveFvAssembly(p: FvAssemblyProblem, grid: FvGridOptions, toler
     toTop += gTop[c] * (x[(nz - 1) * plane + c] - p.top.fluid);
   }
   return { probe, toTop, toBottom, power, cells: n, grid: { nx, ny, nz }, iterations, residual };
-}
-
-function pcg(
-  apply: (v: Float64Array, out: Float64Array) => void,
-  precondition: (r: Float64Array, z: Float64Array) => void,
-  b: Float64Array,
-  tolerance: number,
-  maxIterations: number,
-): { x: Float64Array; iterations: number; residual: number } {
-  const n = b.length;
-  const x = new Float64Array(n);
-  const r = Float64Array.from(b);
-  const z = new Float64Array(n);
-  const q = new Float64Array(n);
-  const dot = (u: Float64Array, v: Float64Array): number => {
-    let s = 0;
-    for (let i = 0; i < n; i++) s += u[i] * v[i];
-    return s;
-  };
-  precondition(r, z);
-  const d = Float64Array.from(z);
-  let rz = dot(r, z);
-  const bNorm = Math.sqrt(dot(b, b));
-  for (let it = 1; it <= maxIterations; it++) {
-    apply(d, q);
-    const alpha = rz / dot(d, q);
-    for (let i = 0; i < n; i++) {
-      x[i] += alpha * d[i];
-      r[i] -= alpha * q[i];
-    }
-    const residual = Math.sqrt(dot(r, r)) / bNorm;
-    if (residual < tolerance) return { x, iterations: it, residual };
-    precondition(r, z);
-    const rzNew = dot(r, z);
-    const beta = rzNew / rz;
-    rz = rzNew;
-    for (let i = 0; i < n; i++) d[i] = z[i] + beta * d[i];
-  }
-  throw new Error(`solveFvAssembly: conjugate gradients did not converge in ${maxIterations} iterations`);
 }
 
 /** One node of a part as the FV sees it: its plane (the active face of its die) and footprint. */
