@@ -12,3 +12,8 @@ export const kPerW = (v: number) => `${fixed(v, 3)} K/W`;
 export const watts = (v: number) => `${fixed(v, Math.abs(v) < 10 ? 2 : 1)} W`;
 /** A fraction 0 … 1 as a percentage, e.g. "25 %". */
 export const percent = (f: number, digits = 0) => `${fixed(f * 100, digits)} %`;
+
+/** The temperature a part's limit is checked on (logic: hot spot; memory: hottest of base die and DRAM tier means). */
+export function checkedTemperature(p: { limit: number; margin: number }): number {
+  return p.limit - p.margin;
+}
