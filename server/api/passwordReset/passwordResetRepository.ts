@@ -10,6 +10,12 @@ export async function createReset(data: { userId: number; tokenHash: string; exp
   });
 }
 
+/** When the user's newest unused link was made, or null. */
+export async function newestOpenAt(userId: number): Promise<Date | null> {
+  const r = await PasswordResetModel.findOne({ where: { userId, usedAt: null }, order: [['createdAt', 'DESC']], attributes: ['createdAt'] });
+  return r?.createdAt ?? null;
+}
+
 /** The open (unused, unexpired) reset with this token hash and its user's e-mail. */
 export async function findOpen(tokenHash: string, now: Date, transaction?: Transaction): Promise<{ id: number; userId: number; email: string } | null> {
   const r = await PasswordResetModel.findOne({ where: { tokenHash, usedAt: null, expiresAt: { [Op.gt]: now } }, transaction });

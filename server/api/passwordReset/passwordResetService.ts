@@ -11,6 +11,9 @@ import { passwordResetMail } from './passwordResetMail';
 /** How long a reset link stays valid. */
 export const RESET_TTL_MS = 3600 * 1000;
 
+/** Least time between two reset mails to one person, whoever asks and from wherever (the rate limit is per client address). */
+export const RESET_COOLDOWN_MS = 60 * 1000;
+
 /** 404 for a link that is unknown, used, replaced by a newer one or expired (one answer for all). */
 export const linkGone = (): AppError => new AppError(404, 'not_found', 'This reset link is unknown, used or expired. Ask for a new one.');
 
@@ -21,6 +24,8 @@ export const linkGone = (): AppError => new AppError(404, 'not_found', 'This res
 export async function requestReset(ctx: AppContext, email: string): Promise<void> {
   const user = await authRepo.findUserByEmail(email);
   if (!user) return;
+  const last = await repo.newestOpenAt(user.id);
+  if (last && Date.now() - last.getTime() < RESET_COOLDOWN_MS) return;
   const token = randomToken();
   const expiresAt = new Date(Date.now() + RESET_TTL_MS);
   await repo.createReset({ userId: user.id, tokenHash: sha256(token), expiresAt });

@@ -43,8 +43,17 @@ async function guest(): Promise<Client> {
   return c;
 }
 
+/** Date the user's links a minute and more back, past the cooldown between two mails to one person. */
+async function pastCooldown(email: string): Promise<void> {
+  await t.sequelize.query(
+    "UPDATE password_resets SET created_at = '2000-01-01 00:00:00.000 +00:00' WHERE user_id = (SELECT id FROM users WHERE email = ?)",
+    { replacements: [email] },
+  );
+}
+
 /** Ask for a link for `email` and return the token of the newest mail to it. */
 async function askToken(email: string): Promise<string> {
+  await pastCooldown(email);
   const before = (await mailsTo(email)).length;
   const res = await (await guest()).post('/api/auth/password-reset', { email });
   expect(res.status).toBe(202);
@@ -109,6 +118,15 @@ describe('password reset', () => {
     expect((await c.get(`/api/auth/password-reset/${token}`)).status).toBe(404);
     expect((await c.post(`/api/auth/password-reset/${token}`, { password: 'third-password-789' })).status).toBe(404);
     expect((await new Client(t.app).login(email, 'new-password-456')).status).toBe(200);
+  });
+
+  it('sends one mail per person per minute, however often and from wherever it is asked for', async () => {
+    const { email } = await freshUser();
+    const token = await askToken(email);
+    for (let i = 0; i < 3; i++) expect((await (await guest()).post('/api/auth/password-reset', { email })).status).toBe(202);
+    await new Promise((r) => setTimeout(r, 200));
+    expect(await mailsTo(email)).toHaveLength(1);
+    expect((await (await guest()).get(`/api/auth/password-reset/${token}`)).status).toBe(200);
   });
 
   it('answers 404 for an expired link, a replaced link and an unknown token', async () => {
