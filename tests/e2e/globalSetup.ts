@@ -46,6 +46,7 @@ export default async function setup(project: TestProject): Promise<() => void> {
   });
   await waitFor(`${base}/api/auth/setup`, 60000);
   project.provide('baseUrl', base);
+  project.provide('dataDir', dataDir);
   return () => {
     if (child?.pid) {
       try {
@@ -61,5 +62,7 @@ export default async function setup(project: TestProject): Promise<() => void> {
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
+    /** The server's data folder (to read what its local mail server kept, as `npm run cli -- mail` does). */
+    dataDir: string;
   }
 }
