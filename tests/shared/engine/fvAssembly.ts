@@ -64,9 +64,8 @@ export interface FvAssemblyProblem {
   probes: FvFace[];
 }
 
-export interface FvAssemblyResult {
-  /** Mean temperature of each probe face (°C). */
-  probe: number[];
+/** Heat split and grid figures of one FV solve. */
+export interface FvRun {
   /** Heat to the top fluid and to the bottom fluid (W), and the total source power. */
   toTop: number;
   toBottom: number;
@@ -74,6 +73,11 @@ export interface FvAssemblyResult {
   cells: number;
   grid: { nx: number; ny: number; nz: number };
   iterations: number;
+}
+
+export interface FvAssemblyResult extends FvRun {
+  /** Mean temperature of each probe face (°C). */
+  probe: number[];
   residual: number;
 }
 
@@ -470,17 +474,11 @@ export function fvCheckModel(): Model {
 }
 
 /** FV figures of one grid: scenario temperatures of every node, the junction influence matrix, heat split. */
-export interface FvFigures {
+export interface FvFigures extends FvRun {
   /** Mean temperature of each node (°C), in `nodes` order (part by part, junction first). */
   nodeT: number[];
   /** R[i][j]: mean junction rise of part i per W at part j's junction, fluids at 0 (K/W). */
   R: number[][] | null;
-  toTop: number;
-  toBottom: number;
-  power: number;
-  cells: number;
-  grid: { nx: number; ny: number; nz: number };
-  iterations: number;
 }
 
 /** Solve a model's first scenario on one grid, and (when withInfluence) its junction influence matrix. */
