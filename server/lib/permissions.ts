@@ -6,23 +6,13 @@ import * as access from '../api/access/accessRepository';
 import { ForbiddenError, NotFoundError, UnauthorizedError } from './errors';
 
 /** What kind of record a route acts on. */
-export type Target = 'workspace' | 'project' | 'assembly' | 'variant' | 'comment' | 'material' | 'partTemplate';
+export type Target = access.Target;
 
 /** A granted access: who, where, with which role. */
 export interface Access extends access.Location {
   userId: number;
   role: Role;
 }
-
-const locators: Record<Target, (id: number) => Promise<access.Location | null>> = {
-  workspace: access.locateWorkspace,
-  project: access.locateProject,
-  assembly: access.locateAssembly,
-  variant: access.locateVariant,
-  comment: access.locateComment,
-  material: access.locateMaterial,
-  partTemplate: access.locatePartTemplate,
-};
 
 const labels: Record<Target, string> = {
   workspace: 'Workspace', project: 'Project', assembly: 'Assembly', variant: 'Variant', comment: 'Comment', material: 'Material', partTemplate: 'Part template',
@@ -50,10 +40,9 @@ export function parseId(raw: unknown, what: string): number {
 export async function authorize(req: Request, target: Target, rawId: unknown, capability: Capability): Promise<Access> {
   const userId = requireUserId(req);
   const id = parseId(rawId, labels[target]);
-  const location = await locators[target](id);
-  if (!location) throw new NotFoundError(labels[target]);
-  const role = await access.findRole(userId, location.workspaceId);
-  if (!role) throw new NotFoundError(labels[target]);
+  const found = await access.locateWithRole(target, id, userId);
+  if (!found?.role) throw new NotFoundError(labels[target]);
+  const { location, role } = found;
   if (!can(role, capability)) throw new ForbiddenError(`A ${role} may not do this (needs ${capability}).`, { capability, role });
   return { ...location, userId, role };
 }

@@ -1,7 +1,6 @@
-/** Look-ups for authorisation: a user's role in a workspace, and which workspace a record belongs to. */
+/** Look-ups for authorisation: which workspace a record belongs to and the user's role there, in one query. */
 import { QueryTypes } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
-import { MembershipModel } from '../../db/models/accounts';
 import { ProjectModel } from '../../db/models/designs';
 
 /** Where a record sits: its workspace and, for design records, its project. */
@@ -13,63 +12,37 @@ export interface Location {
   recordId?: number;
 }
 
-/** The user's role in the workspace, or null when not a member. */
-export async function findRole(userId: number, workspaceId: number): Promise<Role | null> {
-  const m = await MembershipModel.findOne({ where: { userId, workspaceId } });
-  return m ? m.role : null;
-}
+/** Kinds of record a route acts on. */
+export type Target = 'workspace' | 'project' | 'assembly' | 'variant' | 'comment' | 'material' | 'partTemplate';
 
-/** Locate a project. */
-export async function locateProject(projectId: number): Promise<Location | null> {
-  const p = await ProjectModel.findByPk(projectId);
-  return p ? { workspaceId: p.workspaceId, projectId: p.id } : null;
-}
-
-async function one(sql: string, id: number): Promise<Location | null> {
-  const sequelize = ProjectModel.sequelize!;
-  const rows = await sequelize.query<Location>(sql, { replacements: [id], type: QueryTypes.SELECT });
-  return rows[0] ?? null;
-}
-
-/** Locate an assembly. */
-export function locateAssembly(assemblyId: number): Promise<Location | null> {
-  return one(
-    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId
+/** Per kind: the query giving its location (one `?`: the record id). */
+const locations: Record<Target, string> = {
+  workspace: 'SELECT id AS workspaceId FROM workspaces WHERE id = ?',
+  project: 'SELECT workspace_id AS workspaceId, id AS projectId FROM projects WHERE id = ?',
+  assembly: `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId
      FROM assemblies a JOIN projects p ON p.id = a.project_id WHERE a.id = ?`,
-    assemblyId,
-  );
-}
-
-/** Locate a variant. */
-export function locateVariant(variantId: number): Promise<Location | null> {
-  return one(
-    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId
+  variant: `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId
      FROM variants v JOIN assemblies a ON a.id = v.assembly_id JOIN projects p ON p.id = a.project_id WHERE v.id = ?`,
-    variantId,
-  );
-}
-
-/** Locate a comment (recordId = comment id, variantId its variant). */
-export function locateComment(commentId: number): Promise<Location | null> {
-  return one(
-    `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId, c.id AS recordId
+  comment: `SELECT p.workspace_id AS workspaceId, p.id AS projectId, a.id AS assemblyId, v.id AS variantId, c.id AS recordId
      FROM comments c JOIN variants v ON v.id = c.variant_id JOIN assemblies a ON a.id = v.assembly_id
      JOIN projects p ON p.id = a.project_id WHERE c.id = ?`,
-    commentId,
+  material: 'SELECT workspace_id AS workspaceId, id AS recordId FROM materials WHERE id = ?',
+  partTemplate: 'SELECT workspace_id AS workspaceId, id AS recordId FROM part_templates WHERE id = ?',
+};
+
+/**
+ * Where record `id` of kind `target` sits and `userId`'s role in its workspace (null when not a member);
+ * null when there is no such record.
+ */
+export async function locateWithRole(target: Target, id: number, userId: number): Promise<{ location: Location; role: Role | null } | null> {
+  const rows = await ProjectModel.sequelize!.query<Location & { role: Role | null }>(
+    `SELECT l.*, m.role AS role FROM (${locations[target]}) l
+     LEFT JOIN memberships m ON m.workspace_id = l.workspaceId AND m.user_id = ?`,
+    { replacements: [id, userId], type: QueryTypes.SELECT },
   );
-}
-
-/** Locate a library material. */
-export function locateMaterial(materialId: number): Promise<Location | null> {
-  return one('SELECT workspace_id AS workspaceId, id AS recordId FROM materials WHERE id = ?', materialId);
-}
-
-/** Locate a part template. */
-export function locatePartTemplate(templateId: number): Promise<Location | null> {
-  return one('SELECT workspace_id AS workspaceId, id AS recordId FROM part_templates WHERE id = ?', templateId);
-}
-
-/** Locate a workspace (itself). */
-export function locateWorkspace(workspaceId: number): Promise<Location | null> {
-  return one('SELECT id AS workspaceId FROM workspaces WHERE id = ?', workspaceId);
+  const row = rows[0];
+  if (!row) return null;
+  const { role, ...location } = row;
+  for (const k of Object.keys(location) as (keyof Location)[]) if (location[k] === null) delete location[k];
+  return { location, role };
 }
