@@ -52,10 +52,10 @@ export function answerJson(a: StoredAnswer): string {
   return `${JSON.stringify(a.meta).slice(0, -1)},"result":${a.resultJson.slice(0, -1)},"maps":${a.mapsJson ?? 'null'}}}`;
 }
 
-/** Engine runs in progress by variant, input hash and maps: identical requests at the same time share one run. */
-const inFlight = new Map<string, Promise<{ createdAt: Date; summary: string; maps: string | null }>>();
+/** Engine runs in progress by variant, input hash and what they produce: identical requests at the same time share one run. */
+const inFlight = new Map<string, Promise<unknown>>();
 
-function shared<T extends { createdAt: Date; summary: string; maps: string | null }>(key: string, run: () => Promise<T>): Promise<T> {
+function shared<T>(key: string, run: () => Promise<T>): Promise<T> {
   let p = inFlight.get(key) as Promise<T> | undefined;
   if (!p) {
     p = run().finally(() => inFlight.delete(key));
@@ -65,6 +65,11 @@ function shared<T extends { createdAt: Date; summary: string; maps: string | nul
 }
 
 type Current = Awaited<ReturnType<typeof current>>;
+
+/** The answer's metadata for one scenario of the current version. */
+function answerMeta(id: number, v: Current, sid: string, hash: string, withMaps: boolean, cached: boolean, createdAt: Date): StoredAnswer['meta'] {
+  return { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, mapsIncluded: withMaps, cached, createdAt: createdAt.toISOString() };
+}
 
 /** Run the engine for this model and scenario and store the result (with its maps when `withMaps`); activity is recorded when the row is new. */
 function computeAndStore(a: Access, id: number, v: Current, sid: string, hash: string, withMaps: boolean) {
@@ -82,24 +87,20 @@ function computeAndStore(a: Access, id: number, v: Current, sid: string, hash: s
 }
 
 /** The plane maps of a result stored without them: the engine runs again (same inputs, same answer) and the maps are kept. */
-function addMaps(id: number, v: Current, sid: string, hash: string, createdAt: Date): Promise<string> {
+function addMaps(id: number, v: Current, sid: string, hash: string): Promise<string> {
   return shared(`${id}:${hash}:maps`, async () => {
-    const texts = await runEngineTask<AssemblyTexts>({ kind: 'assembly', model: v.model, scenarioId: sid, maps: true });
-    await repo.storeMaps(id, ASSEMBLY_KIND, hash, texts.maps!);
-    return { createdAt, ...texts };
-  }).then((r) => r.maps!);
+    const { maps } = await runEngineTask<AssemblyTexts>({ kind: 'assembly', model: v.model, scenarioId: sid, maps: true });
+    await repo.storeMaps(id, ASSEMBLY_KIND, hash, maps!);
+    return maps!;
+  });
 }
 
 /** The stored answer of the current version, with maps added on demand; null when it was never solved. */
 async function storedAnswer(id: number, v: Current, sid: string, hash: string, withMaps: boolean): Promise<StoredAnswer | null> {
   const stored = await repo.findResultText(id, ASSEMBLY_KIND, hash, withMaps);
   if (!stored) return null;
-  const mapsJson = withMaps ? (stored.maps ?? (await addMaps(id, v, sid, hash, stored.createdAt))) : null;
-  return {
-    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, mapsIncluded: withMaps, cached: true, createdAt: stored.createdAt.toISOString() },
-    resultJson: stored.text,
-    mapsJson,
-  };
+  const mapsJson = withMaps ? (stored.maps ?? (await addMaps(id, v, sid, hash))) : null;
+  return { meta: answerMeta(id, v, sid, hash, withMaps, true, stored.createdAt), resultJson: stored.text, mapsJson };
 }
 
 /** Solve (or reuse) one scenario of the variant's current version; the plane maps only when `withMaps`. */
@@ -110,11 +111,7 @@ export async function solveVariant(a: Access, id: number, scenarioId?: string, w
   const stored = await storedAnswer(id, v, sid, hash, withMaps);
   if (stored) return stored;
   const fresh = await computeAndStore(a, id, v, sid, hash, withMaps);
-  return {
-    meta: { variantId: id, version: v.version, scenarioId: sid, kind: ASSEMBLY_KIND, inputHash: hash, mapsIncluded: withMaps, cached: false, createdAt: fresh.createdAt.toISOString() },
-    resultJson: fresh.summary,
-    mapsJson: withMaps ? fresh.maps : null,
-  };
+  return { meta: answerMeta(id, v, sid, hash, withMaps, false, fresh.createdAt), resultJson: fresh.summary, mapsJson: withMaps ? fresh.maps : null };
 }
 
 /**
