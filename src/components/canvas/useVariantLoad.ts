@@ -1,5 +1,6 @@
 /** Make sure the variant store holds `variantId` and the library store its workspace (shared by the editing screens). */
-import { watch, type Ref } from 'vue';
+import { computed, watch, type Ref } from 'vue';
+import { useCan } from '@/composables/useCan';
 import { useLibraryStore } from '@/stores/library';
 import { useVariantStore } from '@/stores/variant';
 
@@ -15,4 +16,14 @@ export function useVariantLoad(variantId: Ref<number>): void {
     },
     { immediate: true },
   );
+}
+
+/** What the editing tabs of a variant start with: the variant (loaded), whether edits are allowed, its scenarios as select options. */
+export function useVariantScreen(variantId: Ref<number>) {
+  useVariantLoad(variantId);
+  const store = useVariantStore();
+  const can = useCan();
+  const readonly = computed(() => !can('design.edit'));
+  const scenarioOptions = computed(() => (store.model?.scenarios ?? []).map((s) => ({ value: s.id, label: s.name })));
+  return { store, readonly, scenarioOptions };
 }
